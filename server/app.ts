@@ -1,0 +1,65 @@
+import 'reflect-metadata';
+import path from 'node:path';
+import cookieParser from 'cookie-parser';
+import express, { Router, type Express } from 'express';
+import helmet from 'helmet';
+import type { AppDeps } from './deps';
+import { csrfErrorToAppError, csrfProtection } from './middleware/csrf';
+import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { configurePassport } from './middleware/passport';
+import { sessionMiddleware } from './middleware/session';
+import { authRoutes } from './routes/auth.routes';
+import { usersRoutes } from './routes/users.routes';
+
+/** Every API route, mounted with full paths on one router so the tests can read its table. */
+export function buildApiRouter(deps: AppDeps, csrf: ReturnType<typeof csrfProtection>): Router {
+  const api = Router();
+  api.use(authRoutes(deps, csrf));
+  api.use(usersRoutes(deps));
+  return api;
+}
+
+/** Builds the app without listening, so supertest can import it. */
+export function createApp(deps: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  if (deps.env.TRUST_PROXY) app.set('trust proxy', 1);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'default-src': ["'self'"],
+          'img-src': ["'self'", 'data:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'font-src': ["'self'", 'data:'],
+          'script-src': ["'self'"],
+          'connect-src': ["'self'"],
+          'upgrade-insecure-requests': deps.env.COOKIE_SECURE ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use('/api', express.json({ limit: '2mb' }));
+  app.use(cookieParser());
+  app.use(sessionMiddleware(deps));
+  const passport = configurePassport(deps.dataSource);
+  app.use(passport.session());
+
+  const csrf = csrfProtection(deps.env);
+  app.use('/api', csrf.doubleCsrfProtection, csrfErrorToAppError);
+  const api = buildApiRouter(deps, csrf);
+  app.locals.apiRouter = api;
+  app.use(api);
+  app.use('/api', notFoundHandler);
+
+  if (deps.env.STATIC_DIR) {
+    const dir = path.resolve(deps.env.STATIC_DIR);
+    app.use(express.static(dir, { index: false, maxAge: '1h' }));
+    // The client's routes are the browser's: every other GET gets the app shell.
+    app.get('/{*page}', (_req, res) => {
+      res.sendFile(path.join(dir, 'index.html'));
+    });
+  }
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,42 @@
+import { z } from 'zod';
+
+const boolish = z.enum(['1', '0', 'true', 'false', 'yes', 'no', '']).transform((v) => v === '1' || v === 'true' || v === 'yes');
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  HOST: z.string().default('0.0.0.0'),
+  APP_URL: z.string().url().optional(),
+  DATABASE_URL: z.string().url(),
+  SESSION_SECRET: z.string().min(16).default('arcwise-development-secret-change-me'),
+  COOKIE_SECURE: boolish.default(false),
+  TRUST_PROXY: boolish.default(false),
+  SMTP_URL: z.string().url().optional(),
+  MAIL_FROM: z.string().default('Arcwise <arcwise@harborlane.test>'),
+  /** Set when the local mail catcher is in use: its HTTP view of the messages it holds. */
+  MAIL_CATCHER_URL: z.string().url().optional(),
+  MEILI_HOST: z.string().url().optional(),
+  MEILI_API_KEY: z.string().optional(),
+  MEILI_INDEX: z.string().default('parts'),
+  LOGIN_MAX_PER_ACCOUNT: z.coerce.number().int().positive().default(5),
+  LOGIN_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(30),
+  LOGIN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+  STATIC_DIR: z.string().optional(),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+/** Parses the environment once and fails fast, naming every bad key. */
+export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const cleaned = Object.fromEntries(Object.entries(source).filter(([, v]) => v !== undefined && v !== ''));
+  const result = envSchema.safeParse(cleaned);
+  if (!result.success) {
+    const keys = result.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
+    throw new Error(`Invalid environment: ${keys}`);
+  }
+  return result.data;
+}
+
+export function appUrl(env: Env): string {
+  return env.APP_URL ?? `http://localhost:${env.PORT}`;
+}

@@ -1,0 +1,67 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
+import type { ErrorBody } from '../../shared/schemas/error';
+import { AppError } from '../errors';
+
+interface PgError {
+  code?: string;
+  detail?: string;
+  constraint?: string;
+}
+
+function isPgError(err: unknown): err is PgError {
+  return typeof err === 'object' && err !== null && typeof (err as PgError).code === 'string';
+}
+
+function bodyOf(code: string, message: string, details?: unknown): ErrorBody {
+  return { error: details === undefined ? { code, message } : { code, message, details } };
+}
+
+/** Zod issues as the API reports them: the field's path and what is wrong with it. */
+export function zodDetails(err: ZodError): { field: string; message: string }[] {
+  return err.issues.map((i) => ({ field: i.path.join('.') || '(body)', message: i.message }));
+}
+
+export const notFoundHandler: RequestHandler = (req, _res, next) => {
+  next(new AppError(404, 'not_found', `No API route for ${req.method} ${req.path}.`));
+};
+
+/** The one place errors become JSON: `{ error: { code, message, details? } }`, never a stack. */
+export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
+  void _next;
+  if (err instanceof AppError) {
+    res.status(err.status).json(bodyOf(err.code, err.message, err.details));
+    return;
+  }
+  if (err instanceof ZodError) {
+    const details = zodDetails(err);
+    const first = details[0];
+    res.status(400).json(bodyOf('validation_failed', first ? `${first.field}: ${first.message}` : 'Invalid input.', details));
+    return;
+  }
+  const status = typeof err === 'object' && err !== null && 'status' in err ? Number((err as { status: unknown }).status) : 0;
+  const type = typeof err === 'object' && err !== null && 'type' in err ? String((err as { type: unknown }).type) : '';
+  if (type === 'entity.parse.failed') {
+    res.status(400).json(bodyOf('bad_request', 'The request body is not valid JSON.'));
+    return;
+  }
+  if (type === 'entity.too.large' || status === 413) {
+    res.status(413).json(bodyOf('payload_too_large', 'The request is too large.'));
+    return;
+  }
+  if (isPgError(err) && err.code === '23505') {
+    res.status(409).json(bodyOf('conflict', 'That already exists.', { constraint: err.constraint }));
+    return;
+  }
+  if (isPgError(err) && (err.code === '22P02' || err.code === '23503')) {
+    res.status(400).json(bodyOf('bad_request', 'A referenced record does not exist or a value is malformed.'));
+    return;
+  }
+  if (status >= 400 && status < 500) {
+    const message = err instanceof Error ? err.message : 'Bad request.';
+    res.status(status).json(bodyOf('bad_request', message));
+    return;
+  }
+  console.error(`[arcwise] ${req.method} ${req.originalUrl} failed:`, err);
+  res.status(500).json(bodyOf('internal', 'Something went wrong on our side; it has been logged.'));
+};

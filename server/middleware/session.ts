@@ -1,0 +1,26 @@
+import connectPgSimple from 'connect-pg-simple';
+import session from 'express-session';
+import type { RequestHandler } from 'express';
+import type { AppDeps } from '../deps';
+
+export const SESSION_COOKIE = 'arcwise.sid';
+const EIGHT_HOURS_MS = 8 * 3600 * 1000;
+
+/** Sessions in PostgreSQL (connect-pg-simple), the table made by the Foundation migration. */
+export function sessionMiddleware({ env, pool }: AppDeps): RequestHandler {
+  const PgStore = connectPgSimple(session);
+  return session({
+    name: SESSION_COOKIE,
+    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+    secret: env.SESSION_SECRET,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    cookie: {
+      httpOnly: true,
+      sameSite: 'lax',
+      secure: env.COOKIE_SECURE,
+      maxAge: EIGHT_HOURS_MS,
+    },
+  });
+}

@@ -1,0 +1,67 @@
+import { Router } from 'express';
+import passport from 'passport';
+import { acceptInviteBodySchema, loginBodySchema } from '../../shared/schemas/auth';
+import type { AppDeps } from '../deps';
+import { AppError } from '../errors';
+import { currentUser } from '../middleware/auth';
+import type { csrfProtection } from '../middleware/csrf';
+import { loginRateLimits } from '../middleware/rate-limit';
+import { SESSION_COOKIE } from '../middleware/session';
+import { parseBody } from '../middleware/validate';
+import { presentUser } from '../presenters/user.presenter';
+import { acceptInvite, describeInvitation } from '../services/users.service';
+import { mount } from './mount';
+
+const BAD_SIGN_IN = 'Wrong e-mail or password, or the account is disabled.';
+
+export function authRoutes(deps: AppDeps, csrf: ReturnType<typeof csrfProtection>): Router {
+  const r = Router();
+
+  mount(r, 'GET /api/health', (_req, res) => {
+    res.json({ ok: true });
+  });
+
+  mount(r, 'GET /api/auth/csrf', (req, res) => {
+    res.json({ token: csrf.generateCsrfToken(req, res, { overwrite: false }) });
+  });
+
+  mount(r, 'POST /api/auth/login', ...loginRateLimits(deps.env), (req, res, next) => {
+    parseBody(loginBodySchema, req);
+    passport.authenticate('local', (err: unknown, user: Express.User | false) => {
+      if (err) return next(err);
+      if (!user) return next(AppError.unauthorized(BAD_SIGN_IN));
+      // passport regenerates the session on logIn, so a fixed session id cannot be reused.
+      req.logIn(user, (loginErr) => {
+        if (loginErr) return next(loginErr);
+        res.json({ user });
+      });
+    })(req, res, next);
+  });
+
+  mount(r, 'POST /api/auth/logout', (req, res, next) => {
+    req.logout((err) => {
+      if (err) return next(err);
+      req.session.destroy((destroyErr) => {
+        if (destroyErr) return next(destroyErr);
+        res.clearCookie(SESSION_COOKIE);
+        res.status(204).end();
+      });
+    });
+  });
+
+  mount(r, 'GET /api/auth/me', (req, res) => {
+    res.json({ user: currentUser(req) });
+  });
+
+  mount(r, 'GET /api/auth/invite/:token', async (req, res) => {
+    res.json({ invitation: await describeInvitation(deps.dataSource, String(req.params.token)) });
+  });
+
+  mount(r, 'POST /api/auth/accept-invite', async (req, res) => {
+    const body = parseBody(acceptInviteBodySchema, req);
+    const user = await acceptInvite(deps.dataSource, body);
+    res.json({ user: presentUser(user) });
+  });
+
+  return r;
+}

@@ -1,0 +1,18 @@
+import type { Role } from '@shared/roles';
+
+/** The pages of the app and who sees them in the navigation (the API enforces the same rules). */
+export interface NavItem {
+  to: string;
+  label: string;
+  roles: readonly Role[];
+}
+
+const ALL: readonly Role[] = ['clerk', 'technician', 'buyer', 'admin'];
+
+export const NAV_ITEMS: NavItem[] = [
+  { to: '/counter', label: 'Counter', roles: ALL },
+  { to: '/team', label: 'Team', roles: ['admin'] },
+  { to: '/outbox', label: 'Outbox', roles: ['admin'] },
+];
+
+export const navFor = (role: Role): NavItem[] => NAV_ITEMS.filter((i) => i.roles.includes(role));

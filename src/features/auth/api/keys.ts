@@ -1,0 +1,4 @@
+export const authKeys = {
+  me: ['auth', 'me'] as const,
+  invitation: (token: string) => ['auth', 'invitation', token] as const,
+};

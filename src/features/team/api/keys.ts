@@ -1,0 +1,4 @@
+export const teamKeys = {
+  users: ['team', 'users'] as const,
+  shops: ['team', 'shops'] as const,
+};
