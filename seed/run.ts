@@ -1,14 +1,14 @@
 import 'reflect-metadata';
 import { loadEnv } from '../server/config/env';
 import { createDataSource } from '../server/db/data-source';
-import { seedUsers } from './users';
+import { seedAll } from './seed-all';
 
 /** Seeds the demo scenario, idempotently: a second run changes nothing. */
 async function main(): Promise<void> {
-  const env = loadEnv();
+  const env = loadEnv({ ...process.env, SMTP_URL: process.env.SMTP_URL ?? 'smtp://127.0.0.1:1' });
   const ds = await createDataSource(env.DATABASE_URL).initialize();
-  const users = await ds.transaction((m) => seedUsers(m));
-  console.log(`seed: ${users} users created`);
+  const counts = await seedAll(ds);
+  console.log(`seed: ${JSON.stringify(counts)}`);
   await ds.destroy();
 }
 

@@ -3,6 +3,7 @@ import path from 'node:path';
 import cookieParser from 'cookie-parser';
 import express, { Router, type Express } from 'express';
 import helmet from 'helmet';
+import type { PassportStatic } from 'passport';
 import type { AppDeps } from './deps';
 import { csrfErrorToAppError, csrfProtection } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
@@ -12,9 +13,9 @@ import { authRoutes } from './routes/auth.routes';
 import { usersRoutes } from './routes/users.routes';
 
 /** Every API route, mounted with full paths on one router so the tests can read its table. */
-export function buildApiRouter(deps: AppDeps, csrf: ReturnType<typeof csrfProtection>): Router {
+export function buildApiRouter(deps: AppDeps, csrf: ReturnType<typeof csrfProtection>, passport: PassportStatic): Router {
   const api = Router();
-  api.use(authRoutes(deps, csrf));
+  api.use(authRoutes(deps, csrf, passport));
   api.use(usersRoutes(deps));
   return api;
 }
@@ -47,7 +48,7 @@ export function createApp(deps: AppDeps): Express {
 
   const csrf = csrfProtection(deps.env);
   app.use('/api', csrf.doubleCsrfProtection, csrfErrorToAppError);
-  const api = buildApiRouter(deps, csrf);
+  const api = buildApiRouter(deps, csrf, passport);
   app.locals.apiRouter = api;
   app.use(api);
   app.use('/api', notFoundHandler);

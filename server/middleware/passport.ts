@@ -1,11 +1,15 @@
-import passport from 'passport';
+import { Passport, type PassportStatic } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { DataSource } from 'typeorm';
 import { presentUser } from '../presenters/user.presenter';
 import { findActiveUser, verifyCredentials } from '../services/auth.service';
 
-/** passport-local on e-mail and password; the session keeps only the user id. */
-export function configurePassport(ds: DataSource): passport.PassportStatic {
+/**
+ * passport-local on e-mail and password; the session keeps only the user id. One Passport instance
+ * per app, not the package's singleton, so two apps (tests) never share strategies.
+ */
+export function configurePassport(ds: DataSource): PassportStatic {
+  const passport = new Passport() as PassportStatic;
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password', session: true }, (email, password, done) => {
       verifyCredentials(ds, email, password)

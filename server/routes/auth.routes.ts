@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import passport from 'passport';
+import type { PassportStatic } from 'passport';
 import { acceptInviteBodySchema, loginBodySchema } from '../../shared/schemas/auth';
 import type { AppDeps } from '../deps';
 import { AppError } from '../errors';
@@ -14,7 +14,7 @@ import { mount } from './mount';
 
 const BAD_SIGN_IN = 'Wrong e-mail or password, or the account is disabled.';
 
-export function authRoutes(deps: AppDeps, csrf: ReturnType<typeof csrfProtection>): Router {
+export function authRoutes(deps: AppDeps, csrf: ReturnType<typeof csrfProtection>, passport: PassportStatic): Router {
   const r = Router();
 
   mount(r, 'GET /api/health', (_req, res) => {

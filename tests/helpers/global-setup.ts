@@ -1,2 +1,36 @@
-// Placeholder: replaced by the service start-up (PostgreSQL, mail catcher, search stand-in).
-export default function setup(): void {}
+import 'reflect-metadata';
+import type { TestProject } from 'vitest/node';
+import { loadEnv } from '../../server/config/env';
+import { createDataSource } from '../../server/db/data-source';
+import { startMailCatcher } from '../../server/mail/catcher';
+import { seedAll } from '../../seed/seed-all';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    databaseUrl: string;
+    smtpUrl: string;
+    mailCatcherUrl: string;
+  }
+}
+
+/**
+ * Once per run: migrate the test database (npm test made it fresh), seed the demo scenario, and
+ * start the real local services on loopback — the mail catcher and the search stand-in.
+ */
+export default async function setup(project: TestProject): Promise<() => Promise<void>> {
+  const databaseUrl = process.env.TEST_DATABASE_URL ?? process.env.DATABASE_URL;
+  if (!databaseUrl) throw new Error('Set TEST_DATABASE_URL (npm test does): the server tests run against real PostgreSQL.');
+  const env = loadEnv({ ...process.env, DATABASE_URL: databaseUrl, SMTP_URL: 'smtp://127.0.0.1:1' });
+  const ds = await createDataSource(env.DATABASE_URL).initialize();
+  await ds.runMigrations({ transaction: 'each' });
+  await seedAll(ds);
+  await ds.destroy();
+
+  const catcher = await startMailCatcher();
+  project.provide('databaseUrl', databaseUrl);
+  project.provide('smtpUrl', catcher.smtpUrl);
+  project.provide('mailCatcherUrl', catcher.httpUrl);
+  return async () => {
+    await catcher.close();
+  };
+}

@@ -1,0 +1,45 @@
+import 'reflect-metadata';
+import type { Express } from 'express';
+import request from 'supertest';
+import { inject } from 'vitest';
+import { createApp } from '../../server/app';
+import { buildDeps, closeDeps } from '../../server/bootstrap';
+import { loadEnv, type Env } from '../../server/config/env';
+import type { AppDeps } from '../../server/deps';
+
+export interface TestApp {
+  app: Express;
+  deps: AppDeps;
+  close(): Promise<void>;
+}
+
+/** The real app on the real test database and the real mail catcher; only listening is left to supertest. */
+export async function createTestApp(overrides: Partial<Record<keyof Env, string>> = {}): Promise<TestApp> {
+  const env = loadEnv({
+    ...process.env,
+    NODE_ENV: 'test',
+    DATABASE_URL: inject('databaseUrl'),
+    SMTP_URL: inject('smtpUrl'),
+    MAIL_CATCHER_URL: inject('mailCatcherUrl'),
+    APP_URL: 'http://localhost:3999',
+    SESSION_SECRET: 'arcwise-test-secret-0123456789',
+    ...overrides,
+  });
+  const deps = await buildDeps(env);
+  return { app: createApp(deps), deps, close: () => closeDeps(deps) };
+}
+
+export type Agent = ReturnType<typeof request.agent>;
+
+/** A cookie-keeping client with a CSRF token fetched, ready for state changes. */
+export async function csrfAgent(app: Express): Promise<{ agent: Agent; token: string }> {
+  const agent = request.agent(app);
+  const res = await agent.get('/api/auth/csrf').expect(200);
+  return { agent, token: (res.body as { token: string }).token };
+}
+
+export async function signIn(app: Express, email: string, password: string): Promise<{ agent: Agent; token: string }> {
+  const { agent, token } = await csrfAgent(app);
+  await agent.post('/api/auth/login').set('x-csrf-token', token).send({ email, password }).expect(200);
+  return { agent, token };
+}

@@ -1,0 +1,83 @@
+import type { Express, Router } from 'express';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ROLES, type Role } from '../../../shared/roles';
+import { ROUTE_ACCESS, type Access, type RouteKey } from '../../../server/routes/route-access';
+import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
+import { createTestApp, csrfAgent, signIn, type Agent, type TestApp } from '../../helpers/test-app';
+
+interface Layer {
+  route?: { path: string; methods: Record<string, boolean> };
+  handle?: { stack?: Layer[] };
+}
+
+/** Every route the app actually mounts, read from Express's own router. */
+function mountedRoutes(router: Router): string[] {
+  const out: string[] = [];
+  const walk = (stack: Layer[]) => {
+    for (const layer of stack) {
+      if (layer.route) {
+        for (const [m, on] of Object.entries(layer.route.methods))
+          if (on && m !== '_all') out.push(`${m.toUpperCase()} ${layer.route.path}`);
+      } else if (layer.handle?.stack) walk(layer.handle.stack);
+    }
+  };
+  walk((router as unknown as { stack: Layer[] }).stack);
+  return out;
+}
+
+function expected(access: Access, who: Role | 'anonymous'): 'allowed' | 401 | 403 {
+  if (access === 'public') return 'allowed';
+  if (who === 'anonymous') return 401;
+  if (access === 'signed-in' || access.includes(who)) return 'allowed';
+  return 403;
+}
+
+const SAMPLE_PARAMS: Record<string, string> = { id: '00000000-0000-4000-8000-000000000000', token: 'no-such-token-0000000000000' };
+const concrete = (path: string) => path.replace(/:(\w+)/g, (_m, name: string) => SAMPLE_PARAMS[name] ?? 'sample');
+
+// Sign-out would end the agent's session mid-matrix: it runs last.
+const keys = (Object.keys(ROUTE_ACCESS) as RouteKey[]).sort((a, b) => Number(a.includes('logout')) - Number(b.includes('logout')));
+
+describe('role matrix', () => {
+  let t: TestApp;
+  const agents = new Map<Role | 'anonymous', { agent: Agent; token: string }>();
+  beforeAll(async () => {
+    t = await createTestApp();
+    agents.set('anonymous', await csrfAgent(t.app));
+    for (const role of ROLES) {
+      const u = await makeUser(t.deps.dataSource, role);
+      agents.set(role, await signIn(t.app, u.email, TEST_PASSWORD));
+    }
+  });
+  afterAll(() => t.close());
+
+  it('every mounted API route is declared in ROUTE_ACCESS, and every declared route is mounted', () => {
+    const mounted = mountedRoutes((t.app as Express).locals.apiRouter as Router);
+    const declared = Object.keys(ROUTE_ACCESS);
+    expect(mounted.filter((r) => !declared.includes(r))).toEqual([]);
+    expect(declared.filter((r) => !mounted.includes(r))).toEqual([]);
+  });
+
+  for (const key of keys) {
+    const [method, path] = key.split(' ') as [string, string];
+    const access: Access = ROUTE_ACCESS[key];
+    for (const who of ['anonymous', ...ROLES] as const) {
+      const want = expected(access, who);
+      it(`${key} as ${who} → ${want === 'allowed' ? 'passes the gate' : want}`, async () => {
+        const { agent, token } = agents.get(who)!;
+        const m = method.toLowerCase() as 'get' | 'post' | 'patch' | 'put' | 'delete';
+        let req = agent[m](concrete(path)).set('x-csrf-token', token);
+        if (m !== 'get') req = req.send({});
+        const res: request.Response = await req;
+        if (want === 'allowed') {
+          expect([401, 403], `${key} ${who}: ${JSON.stringify(res.body)}`).not.toContain(res.status);
+          expect(res.status).toBeLessThan(500);
+        } else {
+          expect(res.status).toBe(want);
+          expect(res.body.error.code).toBe(want === 401 ? 'unauthorized' : 'forbidden');
+        }
+      });
+    }
+  }
+});
