@@ -58,7 +58,8 @@ export function createApp(deps: AppDeps): Express {
     app.use(express.static(dir, { index: false, maxAge: '1h' }));
     // The client's routes are the browser's: every other GET gets the app shell.
     app.get('/{*page}', (_req, res) => {
-      res.sendFile(path.join(dir, 'index.html'));
+      // dotfiles: the test build lives under .data/, and this path is ours, not the client's.
+      res.sendFile(path.join(dir, 'index.html'), { dotfiles: 'allow' });
     });
   }
   app.use(errorHandler);

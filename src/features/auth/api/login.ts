@@ -10,7 +10,7 @@ export function useLogin() {
   return useMutation({
     mutationFn: login,
     onSuccess: (data) => {
-      qc.clear();
+      qc.removeQueries({ predicate: (q) => q.queryKey[0] !== authKeys.me[0] });
       qc.setQueryData(authKeys.me, data.user);
     },
   });

@@ -9,8 +9,9 @@ export function useLogout() {
   return useMutation({
     mutationFn: logout,
     onSuccess: () => {
-      qc.clear();
+      // Forget everything the last user fetched; the layout then sends the browser to sign-in.
       qc.setQueryData(authKeys.me, null);
+      qc.removeQueries({ predicate: (q) => q.queryKey[0] !== authKeys.me[0] });
     },
   });
 }

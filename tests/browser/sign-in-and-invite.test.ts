@@ -1,0 +1,67 @@
+import { randomUUID } from 'node:crypto';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { openBrowser, signInAs, type BrowserSession } from './browser';
+
+describe('journey 7: sign-in and team', () => {
+  let s: BrowserSession;
+  beforeEach(async () => {
+    s = await openBrowser();
+  });
+  afterEach(async () => {
+    await s.close();
+  });
+
+  it('a clerk signs in and sees the Counter page, with no admin pages in the navigation', async () => {
+    await signInAs(s, 'clerk@harborlane.test');
+    await s.page.getByRole('heading', { name: 'Counter' }).waitFor();
+    expect(s.page.url()).toContain('/counter');
+    const nav = s.page.getByRole('navigation', { name: 'Main' });
+    await expect(nav.getByRole('link', { name: 'Counter' }).isVisible()).resolves.toBe(true);
+    expect(await nav.getByRole('link', { name: 'Team' }).count()).toBe(0);
+    await s.shot('clerk-counter');
+  });
+
+  it('a wrong password shows the error and stays on sign-in', async () => {
+    await signInAs(s, 'clerk@harborlane.test', 'wrong-password');
+    await s.page.getByRole('alert').waitFor();
+    expect(await s.page.getByRole('alert').textContent()).toMatch(/Wrong e-mail or password/);
+    expect(s.page.url()).toContain('/sign-in');
+  });
+
+  it('an admin invites a user, opens the Outbox, follows the link, sets a password, and the user signs in', async () => {
+    const email = `invitee-${randomUUID().slice(0, 6)}@example.test`;
+    await signInAs(s, 'admin@harborlane.test');
+    await s.page.getByRole('heading', { name: 'Counter' }).waitFor();
+    await s.page.getByRole('link', { name: 'Team' }).click();
+    const form = s.page.getByRole('form', { name: 'Invite a user' });
+    await form.getByLabel('Name').fill('Robin Invitee');
+    await form.getByLabel('E-mail').fill(email);
+    await form.getByLabel('Role').selectOption('buyer');
+    await form.getByRole('button', { name: 'Send invitation' }).click();
+    await s.page.getByRole('status').filter({ hasText: 'Invitation sent' }).waitFor();
+    await s.page.getByRole('cell', { name: email }).waitFor();
+    await s.shot('admin-team');
+
+    await s.page.getByRole('link', { name: 'Outbox' }).click();
+    const message = s.page.getByRole('button', { name: new RegExp(`to ${email.replace('.', '\\.')}`) });
+    await message.waitFor({ timeout: 15000 });
+    if ((await message.getAttribute('aria-expanded')) !== 'true') await message.click();
+    await s.shot('admin-outbox');
+    const link = s.page.getByRole('link', { name: /accept-invite\?token=/ }).first();
+    const href = await link.getAttribute('href');
+    expect(href).toContain(s.baseUrl);
+
+    // The invitee opens the link in their own browser.
+    await s.page.getByRole('button', { name: 'Sign out' }).click();
+    await s.page.getByRole('heading', { name: /Sign in/ }).waitFor();
+    await s.page.goto(href!);
+    await s.page.getByText(`Welcome, Robin Invitee (${email})`).waitFor();
+    await s.page.getByLabel('New password').fill('robin-password-1');
+    await s.page.getByLabel('Repeat password').fill('robin-password-1');
+    await s.page.getByRole('button', { name: 'Set password' }).click();
+    await s.page.getByRole('link', { name: 'Go to sign-in' }).click();
+    await signInAs(s, email, 'robin-password-1');
+    await s.page.getByRole('heading', { name: 'Counter' }).waitFor();
+    expect(await s.page.getByText('Robin Invitee').count()).toBeGreaterThan(0);
+  });
+});
