@@ -10,6 +10,7 @@ import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { configurePassport } from './middleware/passport';
 import { sessionMiddleware } from './middleware/session';
 import { authRoutes } from './routes/auth.routes';
+import { catalogRoutes } from './routes/catalog.routes';
 import { usersRoutes } from './routes/users.routes';
 
 /** Every API route, mounted with full paths on one router so the tests can read its table. */
@@ -17,6 +18,7 @@ export function buildApiRouter(deps: AppDeps, csrf: ReturnType<typeof csrfProtec
   const api = Router();
   api.use(authRoutes(deps, csrf, passport));
   api.use(usersRoutes(deps));
+  api.use(catalogRoutes(deps));
   return api;
 }
 

@@ -3,14 +3,17 @@ import type { Env } from './config/env';
 import { createDataSource } from './db/data-source';
 import type { AppDeps } from './deps';
 import { createMailer } from './mail/mailer';
+import { PartSearchIndex } from './search/search-index';
 
 /** Database first, then everything that depends on it; the app is built from these. */
 export async function buildDeps(env: Env): Promise<AppDeps> {
   if (!env.SMTP_URL) throw new Error('SMTP_URL is not set: start the local mail catcher first.');
   const dataSource = await createDataSource(env.DATABASE_URL).initialize();
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 10 });
+  if (!env.MEILI_HOST) throw new Error('MEILI_HOST is not set: start the local search stand-in first.');
   const mailer = createMailer(env.SMTP_URL, env.MAIL_FROM);
-  return { env, dataSource, pool, mailer };
+  const search = new PartSearchIndex(env.MEILI_HOST, env.MEILI_API_KEY, env.MEILI_INDEX);
+  return { env, dataSource, pool, mailer, search };
 }
 
 export async function closeDeps(deps: AppDeps): Promise<void> {

@@ -2,6 +2,7 @@ import type pg from 'pg';
 import type { DataSource } from 'typeorm';
 import type { Env } from './config/env';
 import type { Mailer } from './mail/mailer';
+import type { PartSearchIndex } from './search/search-index';
 
 /** Everything the app needs from outside, built once by server/bootstrap.ts (or by a test). */
 export interface AppDeps {
@@ -10,4 +11,5 @@ export interface AppDeps {
   /** A plain pg pool for the session store and COPY streams. */
   pool: pg.Pool;
   mailer: Mailer;
+  search: PartSearchIndex;
 }

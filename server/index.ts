@@ -11,6 +11,9 @@ async function main(): Promise<void> {
   const env = loadEnv({ ...process.env, ...local.env });
   const deps = await buildDeps(env);
   if (await deps.dataSource.showMigrations()) console.warn('[arcwise] migrations are pending: run server/db/migrate.ts');
+  const started = Date.now();
+  const indexed = await deps.search.rebuild(deps.dataSource);
+  console.log(`[arcwise] search index rebuilt from PostgreSQL: ${indexed} parts in ${Date.now() - started} ms`);
   const app = createApp(deps);
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     console.log(`[arcwise] listening on http://localhost:${env.PORT}`);

@@ -1,4 +1,5 @@
 import { startMailCatcher, type MailCatcher } from './mail/catcher';
+import { startSearchStandin } from './search-standin/server';
 
 export interface LocalServices {
   /** Environment entries that point the app at the services started here. */
@@ -16,6 +17,12 @@ export async function startLocalServices(source: NodeJS.ProcessEnv): Promise<Loc
     env.MAIL_CATCHER_URL = catcher.httpUrl;
     closers.push(() => catcher.close());
     console.log(`[arcwise] local mail catcher on ${catcher.smtpUrl}; messages on the Outbox page`);
+  }
+  if (!source.MEILI_HOST) {
+    const standin = await startSearchStandin({ port: 0 });
+    env.MEILI_HOST = standin.url;
+    closers.push(() => standin.close());
+    console.log(`[arcwise] local search stand-in on ${standin.url}`);
   }
   return {
     env,

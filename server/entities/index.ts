@@ -1,9 +1,57 @@
 import { AuditLogEntity } from './audit-log.entity';
+import { BrandHeatCodeEntity } from './brand-heat-code.entity';
+import { BrandEntity } from './brand.entity';
+import { CoilSpecEntity } from './coil-spec.entity';
+import { EngineEntity } from './engine.entity';
+import { FitmentEntity } from './fitment.entity';
+import { InterchangeEntity } from './interchange.entity';
 import { InvitationEntity } from './invitation.entity';
+import { PartEntity } from './part.entity';
+import { PlugSpecEntity } from './plug-spec.entity';
 import { SettingEntity } from './setting.entity';
 import { ShopEntity } from './shop.entity';
+import { StockEntity } from './stock.entity';
+import { SupplierPriceEntity } from './supplier-price.entity';
+import { SupplierEntity } from './supplier.entity';
 import { UserEntity } from './user.entity';
+import { VehicleEntity } from './vehicle.entity';
 
-export { AuditLogEntity, InvitationEntity, SettingEntity, ShopEntity, UserEntity };
+export {
+  AuditLogEntity,
+  BrandEntity,
+  BrandHeatCodeEntity,
+  CoilSpecEntity,
+  EngineEntity,
+  FitmentEntity,
+  InterchangeEntity,
+  InvitationEntity,
+  PartEntity,
+  PlugSpecEntity,
+  SettingEntity,
+  ShopEntity,
+  StockEntity,
+  SupplierEntity,
+  SupplierPriceEntity,
+  UserEntity,
+  VehicleEntity,
+};
 
-export const ENTITIES = [ShopEntity, UserEntity, InvitationEntity, AuditLogEntity, SettingEntity];
+export const ENTITIES = [
+  ShopEntity,
+  UserEntity,
+  InvitationEntity,
+  AuditLogEntity,
+  SettingEntity,
+  BrandEntity,
+  BrandHeatCodeEntity,
+  PartEntity,
+  CoilSpecEntity,
+  PlugSpecEntity,
+  EngineEntity,
+  VehicleEntity,
+  FitmentEntity,
+  InterchangeEntity,
+  StockEntity,
+  SupplierEntity,
+  SupplierPriceEntity,
+];

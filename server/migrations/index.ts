@@ -1,4 +1,5 @@
 import { Foundation1764600000000 } from './1764600000000-Foundation';
+import { Catalog1764600100000 } from './1764600100000-Catalog';
 
 // Listed explicitly: globs find nothing under tsx and vitest.
-export const MIGRATIONS = [Foundation1764600000000];
+export const MIGRATIONS = [Foundation1764600000000, Catalog1764600100000];

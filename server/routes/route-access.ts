@@ -26,6 +26,18 @@ export const ROUTE_ACCESS = {
   'PATCH /api/users/:id': ADMIN,
   'GET /api/shops': ADMIN,
   'GET /api/outbox': ADMIN,
+  'GET /api/vehicles/years': COUNTER,
+  'GET /api/vehicles/makes': COUNTER,
+  'GET /api/vehicles/models': COUNTER,
+  'GET /api/vehicles/engines': COUNTER,
+  'GET /api/engines/:id': COUNTER,
+  'GET /api/search': COUNTER,
+  'GET /api/parts/:id': COUNTER,
+  'GET /api/brands': COUNTER,
+  'POST /api/brands': BUYERS,
+  'POST /api/parts': BUYERS,
+  'PATCH /api/parts/:id': BUYERS,
+  'POST /api/interchange': BUYERS,
 } as const satisfies Record<string, Access>;
 
 export type RouteKey = keyof typeof ROUTE_ACCESS;

@@ -105,3 +105,4 @@ export const engineSpecSchema = z.object({
 });
 export type EngineSpec = z.infer<typeof engineSpecSchema>;
 export type EngineSpecInput = z.input<typeof engineSpecSchema>;
+export type PartKind = (typeof PART_KINDS)[number];

@@ -41,6 +41,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   const deps = await buildDeps(env);
   await deps.dataSource.runMigrations({ transaction: 'each' });
   await seedAll(deps.dataSource);
+  await deps.search.rebuild(deps.dataSource);
   const app = createApp(deps);
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));

@@ -1,0 +1,200 @@
+import type { EntityManager } from 'typeorm';
+import { normalizePartNumber } from '../shared/part-number';
+import { brands, engines, fitments, interchange, parts, stock, supersessions, supplierPrices, suppliers, vehicles } from './data';
+
+export interface CatalogCounts {
+  parts: number;
+  engines: number;
+  vehicles: number;
+  interchange: number;
+}
+
+const brandNorm = (name: string) => name.trim().toLowerCase();
+
+/**
+ * Loads the invented demo catalog. Every insert is ON CONFLICT DO NOTHING, so a second run changes
+ * nothing and a buyer's later edits (prices, specs) are never overwritten by the demo data.
+ */
+export async function seedCatalog(m: EntityManager): Promise<CatalogCounts> {
+  const count = async (table: string): Promise<number> =>
+    ((await m.query(`SELECT count(*)::int AS n FROM ${table}`)) as { n: number }[])[0]?.n ?? 0;
+  const before = {
+    parts: await count('part'),
+    engines: await count('engine'),
+    vehicles: await count('vehicle'),
+    interchange: await count('interchange'),
+  };
+
+  for (const b of brands) {
+    await m.query(`INSERT INTO brand (name, name_norm, ours, heat_code_note) VALUES ($1, $2, $3, $4) ON CONFLICT (name_norm) DO NOTHING`, [
+      b.name,
+      brandNorm(b.name),
+      b.ours,
+      b.heatCodeNote,
+    ]);
+    for (const h of b.heatCodes) {
+      await m.query(
+        `INSERT INTO brand_heat_code (brand_id, code, heat_step) SELECT id, $2, $3 FROM brand WHERE name_norm = $1 ON CONFLICT DO NOTHING`,
+        [brandNorm(b.name), h.code, h.heatStep],
+      );
+    }
+  }
+  const brandIds = new Map<string, string>(
+    ((await m.query(`SELECT id, name_norm FROM brand`)) as { id: string; name_norm: string }[]).map((r) => [r.name_norm, r.id]),
+  );
+
+  for (const e of engines) {
+    await m.query(
+      `INSERT INTO engine (code, description, displacement_l, cylinders, compression_ratio, aspiration, peak_boost_kpa, rod_ratio,
+         spec_gap_mm, dwell_ms, cranking_dwell_ms, driver_current_limit_a, system_voltage)
+       VALUES ($1,$2,$3,$4,$5,$6,$7,$8,$9,$10,$11,$12,$13) ON CONFLICT (code) DO NOTHING`,
+      [
+        e.code,
+        e.description,
+        e.displacementL,
+        e.cylinders,
+        e.compressionRatio,
+        e.aspiration,
+        e.peakBoostKpa ?? 0,
+        e.rodRatio ?? 3.5,
+        e.specGapMm,
+        e.dwellMs,
+        e.crankingDwellMs,
+        e.driverCurrentLimitA ?? null,
+        e.systemVoltage,
+      ],
+    );
+  }
+  const engineIds = new Map<string, string>(
+    ((await m.query(`SELECT id, code FROM engine`)) as { id: string; code: string }[]).map((r) => [r.code, r.id]),
+  );
+
+  for (const p of parts) {
+    const brandId = brandIds.get(brandNorm(p.brand));
+    if (!brandId) throw new Error(`seed: unknown brand ${p.brand}`);
+    const rows = (await m.query(
+      `INSERT INTO part (brand_id, part_number, part_number_norm, kind, description, gtin, status)
+       VALUES ($1,$2,$3,$4,$5,$6,$7) ON CONFLICT (brand_id, part_number_norm) DO NOTHING RETURNING id`,
+      [brandId, p.partNumber, normalizePartNumber(p.partNumber), p.kind, p.description, p.gtin, p.status],
+    )) as { id: string }[];
+    const id = rows[0]?.id;
+    if (!id) continue;
+    if (p.kind === 'coil') {
+      const s = p.spec;
+      await m.query(
+        `INSERT INTO coil_spec (part_id, architecture, driver, outputs, connector_pins, connector_key, primary_ohm_min, primary_ohm_max,
+           primary_inductance_mh, secondary_kohm_min, secondary_kohm_max, turns_ratio, available_kv, peak_current_a)
+         VALUES ($1,$2,$3,$4,$5,$6,$7,$8,$9,$10,$11,$12,$13,$14)`,
+        [
+          id,
+          s.architecture,
+          s.driver,
+          s.outputs,
+          s.connectorPins,
+          s.connectorKey,
+          s.primaryOhmMin,
+          s.primaryOhmMax,
+          s.primaryInductanceMh,
+          s.secondaryKohmMin ?? null,
+          s.secondaryKohmMax ?? null,
+          s.turnsRatio,
+          s.availableKv ?? null,
+          s.peakCurrentA,
+        ],
+      );
+    } else {
+      const s = p.spec;
+      await m.query(
+        `INSERT INTO plug_spec (part_id, thread_mm, thread_pitch_mm, reach_mm, seat, hex_mm, heat_code, gap_mm, regappable, resistor,
+           resistor_kohm, projected_tip, electrode)
+         VALUES ($1,$2,$3,$4,$5,$6,$7,$8,$9,$10,$11,$12,$13)`,
+        [
+          id,
+          s.threadMm,
+          s.threadPitchMm,
+          s.reachMm,
+          s.seat,
+          s.hexMm,
+          s.heatCode,
+          s.gapMm,
+          s.regappable,
+          s.resistor,
+          s.resistorKohm ?? null,
+          s.projectedTip,
+          s.electrode,
+        ],
+      );
+    }
+  }
+  const partIds = new Map<string, string>(
+    ((await m.query(`SELECT id, part_number_norm FROM part`)) as { id: string; part_number_norm: string }[]).map((r) => [
+      r.part_number_norm,
+      r.id,
+    ]),
+  );
+  const partId = (printed: string): string => {
+    const id = partIds.get(normalizePartNumber(printed));
+    if (!id) throw new Error(`seed: unknown part ${printed}`);
+    return id;
+  };
+
+  for (const s of supersessions) {
+    await m.query(`UPDATE part SET superseded_by_id = $2 WHERE id = $1 AND superseded_by_id IS NULL`, [
+      partId(s.partNumber),
+      partId(s.supersededBy),
+    ]);
+  }
+  for (const v of vehicles) {
+    await m.query(`INSERT INTO vehicle (year, make, model, trim, engine_id) VALUES ($1,$2,$3,$4,$5) ON CONFLICT DO NOTHING`, [
+      v.year,
+      v.make,
+      v.model,
+      v.trim,
+      engineIds.get(v.engineCode),
+    ]);
+  }
+  for (const f of fitments) {
+    await m.query(`INSERT INTO fitment (part_id, engine_id, position, quantity) VALUES ($1,$2,$3,$4) ON CONFLICT DO NOTHING`, [
+      partId(f.partNumber),
+      engineIds.get(f.engineCode),
+      f.position,
+      f.quantity,
+    ]);
+  }
+  for (const i of interchange) {
+    await m.query(
+      `INSERT INTO interchange (foreign_brand, foreign_number, foreign_number_norm, part_id, source, confidence) VALUES ($1,$2,$3,$4,$5,$6) ON CONFLICT DO NOTHING`,
+      [i.foreignBrand, i.foreignNumber, normalizePartNumber(i.foreignNumber), partId(i.ourPartNumber), i.source, i.confidence],
+    );
+  }
+  for (const s of stock) {
+    await m.query(`INSERT INTO stock (part_id, on_hand, bin) VALUES ($1,$2,$3) ON CONFLICT DO NOTHING`, [
+      partId(s.partNumber),
+      s.onHand,
+      s.bin,
+    ]);
+  }
+  for (const s of suppliers) {
+    await m.query(`INSERT INTO supplier (key, name, contact_email, phone) VALUES ($1,$2,$3,$4) ON CONFLICT DO NOTHING`, [
+      s.key,
+      s.name,
+      s.contactEmail,
+      s.phone,
+    ]);
+  }
+  const supplierIds = new Map<string, string>(
+    ((await m.query(`SELECT id, key FROM supplier`)) as { id: string; key: string }[]).map((r) => [r.key, r.id]),
+  );
+  for (const p of supplierPrices) {
+    await m.query(
+      `INSERT INTO supplier_price (supplier_id, part_id, cost_cents, list_cents, core_cents, pack_qty, effective_date) VALUES ($1,$2,$3,$4,$5,$6,$7) ON CONFLICT DO NOTHING`,
+      [supplierIds.get(p.supplierKey), partId(p.partNumber), p.costCents, p.listCents, p.coreChargeCents, p.packQty, p.effectiveDate],
+    );
+  }
+  return {
+    parts: (await count('part')) - before.parts,
+    engines: (await count('engine')) - before.engines,
+    vehicles: (await count('vehicle')) - before.vehicles,
+    interchange: (await count('interchange')) - before.interchange,
+  };
+}

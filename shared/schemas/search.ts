@@ -1,0 +1,57 @@
+import { z } from 'zod';
+import { COIL_ARCHITECTURES, COIL_DRIVERS, PART_KINDS, PLUG_SEATS } from './specs';
+
+export const SEARCH_LIMIT_MAX = 100;
+export const MATCHED_BY = ['number', 'interchange', 'supersession', 'gtin', 'text', 'vehicle'] as const;
+export type MatchedBy = (typeof MATCHED_BY)[number];
+
+const bool = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
+const num = z.coerce.number().finite();
+
+/** The spec facets a clerk can filter on, by their spec field names. */
+export const searchFacetQuerySchema = z.object({
+  brand: z.string().max(80).optional(),
+  architecture: z.enum(COIL_ARCHITECTURES).optional(),
+  driver: z.enum(COIL_DRIVERS).optional(),
+  connectorPins: z.coerce.number().int().optional(),
+  connectorKey: z.string().max(40).optional(),
+  /** A measured or quoted primary resistance: coils whose window contains it. */
+  primaryOhm: num.optional(),
+  threadMm: num.optional(),
+  reachMm: num.optional(),
+  seat: z.enum(PLUG_SEATS).optional(),
+  hexMm: num.optional(),
+  heatStep: z.coerce.number().int().min(1).max(15).optional(),
+  resistor: bool.optional(),
+  gapMm: num.optional(),
+});
+export const FACET_FIELDS = Object.keys(searchFacetQuerySchema.shape) as (keyof z.infer<typeof searchFacetQuerySchema>)[];
+
+export const searchQuerySchema = searchFacetQuerySchema.extend({
+  q: z.string().max(200).default(''),
+  kind: z.enum(PART_KINDS).optional(),
+  limit: z.coerce.number().int().min(1).max(SEARCH_LIMIT_MAX).default(20),
+  offset: z.coerce.number().int().min(0).max(10_000).default(0),
+});
+export type SearchQuery = z.infer<typeof searchQuerySchema>;
+
+export const searchHitSchema = z.object({
+  partId: z.string(),
+  brand: z.string(),
+  partNumber: z.string(),
+  kind: z.enum(PART_KINDS),
+  description: z.string(),
+  matchedBy: z.enum(MATCHED_BY),
+  matchedNumber: z.string().nullable(),
+  inStock: z.boolean(),
+  onHand: z.number().int(),
+  hasSpec: z.boolean(),
+});
+export type SearchHit = z.infer<typeof searchHitSchema>;
+
+export const searchResponseSchema = z.object({
+  hits: z.array(searchHitSchema),
+  total: z.number().int(),
+  facets: z.record(z.string(), z.record(z.string(), z.number())),
+});
+export type SearchResponse = z.infer<typeof searchResponseSchema>;
