@@ -11,6 +11,11 @@ import { configurePassport } from './middleware/passport';
 import { sessionMiddleware } from './middleware/session';
 import { authRoutes } from './routes/auth.routes';
 import { catalogRoutes } from './routes/catalog.routes';
+import { compatRoutes } from './routes/compat.routes';
+import { fitReportRoutes } from './routes/fit-reports.routes';
+import { settingsRoutes } from './routes/settings.routes';
+import { priceListRoutes } from './routes/price-lists.routes';
+import { supplierRoutes } from './routes/suppliers.routes';
 import { usersRoutes } from './routes/users.routes';
 
 /** Every API route, mounted with full paths on one router so the tests can read its table. */
@@ -19,6 +24,11 @@ export function buildApiRouter(deps: AppDeps, csrf: ReturnType<typeof csrfProtec
   api.use(authRoutes(deps, csrf, passport));
   api.use(usersRoutes(deps));
   api.use(catalogRoutes(deps));
+  api.use(compatRoutes(deps));
+  api.use(fitReportRoutes(deps));
+  api.use(settingsRoutes(deps));
+  api.use(supplierRoutes(deps));
+  api.use(priceListRoutes(deps));
   return api;
 }
 

@@ -15,6 +15,7 @@ import { CatalogEditService } from '../services/catalog/catalog-edit.service';
 import { getEngineDetail, getPartDetail } from '../services/catalog/part-detail.service';
 import { listEngines, listMakes, listModels, listYears } from '../services/catalog/vehicles.service';
 import { searchParts } from '../services/search.service';
+import { getSettings } from '../services/settings.service';
 import { mount } from './mount';
 
 export function catalogRoutes(deps: AppDeps): Router {
@@ -44,12 +45,12 @@ export function catalogRoutes(deps: AppDeps): Router {
   });
 
   mount(r, 'GET /api/search', async (req, res) => {
-    res.json(await searchParts(deps.search, parseQuery(searchQuerySchema, req)));
+    res.json(await searchParts(deps.search, parseQuery(searchQuerySchema, req), ds, (await getSettings(ds)).compat));
   });
 
   mount(r, 'GET /api/parts/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    res.json(await getPartDetail(ds, id, currentUser(req).role));
+    res.json(await getPartDetail(ds, id, currentUser(req).role, (await getSettings(ds)).compat));
   });
 
   mount(r, 'GET /api/brands', async (_req, res) => {
@@ -72,7 +73,7 @@ export function catalogRoutes(deps: AppDeps): Router {
     const body = parseBody(createPartBodySchema, req);
     const user = currentUser(req);
     const id = await edits.createPart(user.id, body);
-    res.status(201).json(await getPartDetail(ds, id, user.role));
+    res.status(201).json(await getPartDetail(ds, id, user.role, (await getSettings(ds)).compat));
   });
 
   mount(r, 'PATCH /api/parts/:id', async (req, res) => {
@@ -80,7 +81,7 @@ export function catalogRoutes(deps: AppDeps): Router {
     const body = parseBody(updatePartBodySchema, req);
     const user = currentUser(req);
     await edits.updatePart(user.id, id, body);
-    res.json(await getPartDetail(ds, id, user.role));
+    res.json(await getPartDetail(ds, id, user.role, (await getSettings(ds)).compat));
   });
 
   mount(r, 'POST /api/interchange', async (req, res) => {

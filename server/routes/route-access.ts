@@ -11,7 +11,8 @@ const ADMIN = ['admin'] as const;
 const BUYERS = ['buyer', 'admin'] as const;
 const COUNTER = ['clerk', 'technician', 'buyer', 'admin'] as const;
 const COMPARE = ['clerk', 'technician', 'buyer', 'admin'] as const;
-const BENCH = ['technician', 'buyer', 'admin', 'clerk'] as const;
+// Bench testing is shop work; the store's staff may run it for a customer's coil too.
+const BENCH = ['technician', 'clerk', 'buyer', 'admin'] as const;
 
 export const ROUTE_ACCESS = {
   'GET /api/health': 'public',
@@ -38,9 +39,29 @@ export const ROUTE_ACCESS = {
   'POST /api/parts': BUYERS,
   'PATCH /api/parts/:id': BUYERS,
   'POST /api/interchange': BUYERS,
+  'POST /api/compat/coil': COMPARE,
+  'POST /api/compat/plug': COMPARE,
+  'GET /api/engines/:id/alternates': COUNTER,
+  'POST /api/bench/coil': BENCH,
+  'GET /api/fit-reports': COMPARE,
+  'POST /api/fit-reports': COMPARE,
+  'GET /api/fit-reports/:id': COMPARE,
+  'POST /api/fit-reports/:id/email': COMPARE,
+  'GET /api/shared/fit-reports/:token': 'public',
+  'GET /api/settings': ADMIN,
+  'PUT /api/settings': ADMIN,
+  'GET /api/suppliers': BUYERS,
+  'POST /api/suppliers': BUYERS,
+  'PATCH /api/suppliers/:id': BUYERS,
+  'GET /api/price-lists': BUYERS,
+  'POST /api/price-lists': BUYERS,
+  'GET /api/price-lists/:id': BUYERS,
+  'GET /api/price-lists/:id/errors': BUYERS,
+  'GET /api/price-lists/:id/errors.csv': BUYERS,
+  'GET /api/price-lists/:id/changes': BUYERS,
+  'POST /api/price-lists/:id/preview': BUYERS,
+  'POST /api/price-lists/:id/commit': BUYERS,
+  'POST /api/price-lists/:id/discard': BUYERS,
 } as const satisfies Record<string, Access>;
 
 export type RouteKey = keyof typeof ROUTE_ACCESS;
-
-// Kept for later route groups that share the same role sets.
-export const ACCESS_GROUPS = { ADMIN, BUYERS, COUNTER, COMPARE, BENCH };

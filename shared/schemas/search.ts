@@ -46,6 +46,15 @@ export const searchHitSchema = z.object({
   inStock: z.boolean(),
   onHand: z.number().int(),
   hasSpec: z.boolean(),
+  /** For a hit found through interchange: the verdict of the foreign part's spec against ours. */
+  check: z
+    .object({
+      verdict: z.enum(['go', 'review', 'no-go']),
+      concerns: z.array(z.object({ id: z.string(), verdict: z.enum(['go', 'review', 'no-go']), reason: z.string() })),
+      engine: z.string(),
+    })
+    .nullable()
+    .optional(),
 });
 export type SearchHit = z.infer<typeof searchHitSchema>;
 

@@ -1,8 +1,11 @@
 import type { DataSource } from 'typeorm';
+import type { CompatSettings } from '../../../shared/compat';
+import { normalizePartNumber } from '../../../shared/part-number';
 import type { Role } from '../../../shared/roles';
 import { AppError } from '../../errors';
 import { presentPart } from '../../presenters/part.presenter';
 import { presentPrice, presentStock, sellPrice } from '../../presenters/stock-price.presenter';
+import { interchangeVerdict } from '../compat/interchange-verdict.service';
 import { engineSpecOf, loadEngine, loadPartRows, loadPrices, loadSpecs, loadStock } from './part-loader';
 
 interface ChainRow {
@@ -36,7 +39,7 @@ async function supersessionOf(ds: DataSource, id: string) {
   };
 }
 
-export async function getPartDetail(ds: DataSource, id: string, role: Role) {
+export async function getPartDetail(ds: DataSource, id: string, role: Role, settings: CompatSettings) {
   const row = (await loadPartRows(ds, [id])).get(id);
   if (!row) throw AppError.notFound('Part');
   const spec = (await loadSpecs(ds, [id])).get(id) ?? {};
@@ -52,14 +55,22 @@ export async function getPartDetail(ds: DataSource, id: string, role: Role) {
   return {
     part: presentPart(row),
     spec: spec.coil ?? spec.plug ?? null,
-    interchange: interchange.map((i) => ({
-      id: i.id,
-      brand: i.brand,
-      number: i.number,
-      source: i.source,
-      confidence: i.confidence,
-      originalPartId: i.original_part_id,
-    })),
+    // Each claim of equivalence carries the verdict of the foreign part's own spec against ours.
+    interchange: await Promise.all(
+      interchange.map(async (i) => ({
+        id: i.id,
+        brand: i.brand,
+        number: i.number,
+        source: i.source,
+        confidence: i.confidence,
+        originalPartId: i.original_part_id,
+        check: await interchangeVerdict(
+          ds,
+          { foreignNumberNorm: normalizePartNumber(i.number), originalPartId: i.original_part_id, partId: id },
+          settings,
+        ),
+      })),
+    ),
     supersession: await supersessionOf(ds, id),
     stock: presentStock(stock.onHand, stock.bin, role),
     price: sellPrice(prices, role),

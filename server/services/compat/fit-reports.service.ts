@@ -1,0 +1,140 @@
+import { randomBytes } from 'node:crypto';
+import type { DataSource } from 'typeorm';
+import type { CompatSettings } from '../../../shared/compat';
+import type { User } from '../../../shared/schemas/auth';
+import { CAUTIONS, type CompatResult, type FitReport, type FitReportBody } from '../../../shared/schemas/compat';
+import { AppError } from '../../errors';
+import { escapeHtml, type Mailer } from '../../mail/mailer';
+import { audit } from '../audit.service';
+import { compareCoilRequest, comparePlugRequest } from './compare.service';
+
+interface FitReportRow {
+  id: string;
+  kind: 'coil' | 'plug';
+  title: string;
+  notes: string;
+  inputs: unknown;
+  result: CompatResult;
+  verdict: FitReport['verdict'];
+  share_token: string;
+  created_at: Date;
+  created_by_name: string;
+  shop_id: string | null;
+  shop_name: string | null;
+}
+
+const SELECT = `SELECT r.id, r.kind, r.title, r.notes, r.inputs, r.result, r.verdict, r.share_token, r.created_at, r.shop_id,
+                       u.name AS created_by_name, s.name AS shop_name
+                  FROM fit_report r JOIN "user" u ON u.id = r.created_by LEFT JOIN shop s ON s.id = r.shop_id`;
+
+export const shareUrlOf = (appUrl: string, token: string) => `${appUrl}/shared/fit-reports/${token}`;
+
+function present(r: FitReportRow, appUrl: string): FitReport {
+  return {
+    id: r.id,
+    kind: r.kind,
+    title: r.title,
+    notes: r.notes,
+    verdict: r.verdict,
+    createdAt: r.created_at.toISOString(),
+    createdBy: r.created_by_name,
+    shopName: r.shop_name,
+    inputs: r.inputs,
+    result: r.result,
+    shareUrl: shareUrlOf(appUrl, r.share_token),
+  };
+}
+
+/** A technician sees only its own shop's reports; the store's staff see every report. */
+function visibleTo(user: User, r: { shop_id: string | null }): boolean {
+  return user.role !== 'technician' || (r.shop_id !== null && r.shop_id === user.shopId);
+}
+
+export class FitReportService {
+  constructor(
+    private readonly ds: DataSource,
+    private readonly appUrl: string,
+  ) {}
+
+  /** The verdict is recomputed here from the inputs: a client's verdict is never trusted. */
+  async create(user: User, body: FitReportBody, settings: CompatSettings): Promise<FitReport> {
+    const result =
+      body.kind === 'coil'
+        ? await compareCoilRequest(this.ds, body.inputs, settings)
+        : await comparePlugRequest(this.ds, body.inputs, settings);
+    const token = randomBytes(24).toString('base64url');
+    const title = body.title?.trim() || `${result.substitute.label} for ${result.original.label} on ${result.engine.label.split(' — ')[0]}`;
+    const id = await this.ds.transaction(async (m) => {
+      const rows = (await m.query(
+        `INSERT INTO fit_report (kind, title, notes, inputs, result, verdict, share_token, created_by, shop_id)
+         VALUES ($1,$2,$3,$4,$5,$6,$7,$8,$9) RETURNING id`,
+        [
+          body.kind,
+          title,
+          body.notes ?? '',
+          JSON.stringify(body.inputs),
+          JSON.stringify(result),
+          result.verdict,
+          token,
+          user.id,
+          user.shopId,
+        ],
+      )) as { id: string }[];
+      await audit(m, {
+        actorId: user.id,
+        action: 'fit-report.create',
+        entityType: 'fit_report',
+        entityId: rows[0]!.id,
+        data: { verdict: result.verdict },
+      });
+      return rows[0]!.id;
+    });
+    return this.get(user, id);
+  }
+
+  async list(user: User) {
+    const rows = (await this.ds.query(`${SELECT} WHERE ($1::uuid IS NULL OR r.shop_id = $1) ORDER BY r.created_at DESC LIMIT 200`, [
+      user.role === 'technician' ? user.shopId : null,
+    ])) as FitReportRow[];
+    return rows.map((r) => ({
+      id: r.id,
+      kind: r.kind,
+      title: r.title,
+      verdict: r.verdict,
+      createdAt: r.created_at.toISOString(),
+      createdBy: r.created_by_name,
+      shopName: r.shop_name,
+    }));
+  }
+
+  async get(user: User, id: string): Promise<FitReport> {
+    const rows = (await this.ds.query(`${SELECT} WHERE r.id = $1`, [id])) as FitReportRow[];
+    const r = rows[0];
+    // Another shop's report is "not found", so its existence does not leak.
+    if (!r || !visibleTo(user, r)) throw AppError.notFound('Fit report');
+    return present(r, this.appUrl);
+  }
+
+  async getShared(token: string): Promise<FitReport> {
+    const rows = (await this.ds.query(`${SELECT} WHERE r.share_token = $1`, [token])) as FitReportRow[];
+    if (!rows[0]) throw AppError.notFound('Fit report');
+    return present(rows[0], this.appUrl);
+  }
+
+  async email(user: User, id: string, to: string, mailer: Mailer): Promise<void> {
+    const report = await this.get(user, id);
+    const rows = report.result.checks.map((c) => `  ${c.verdict.toUpperCase().padEnd(6)} ${c.id}: ${c.reason}`).join('\n');
+    const htmlRows = report.result.checks
+      .map((c) => `<tr><td><b>${escapeHtml(c.verdict)}</b></td><td>${escapeHtml(c.id)}</td><td>${escapeHtml(c.reason)}</td></tr>`)
+      .join('');
+    await mailer.send({
+      to,
+      subject: `Fit report: ${report.title} — ${report.verdict}`,
+      text: `${user.name} sent you a fit report from Arcwise.\n\n${report.title}\nOverall verdict: ${report.verdict}\n\n${rows}\n\nOpen it: ${report.shareUrl}\n\n${CAUTIONS.join('\n')}\n`,
+      html: `<p>${escapeHtml(user.name)} sent you a fit report from Arcwise.</p><h2>${escapeHtml(report.title)}</h2><p>Overall verdict: <b>${escapeHtml(report.verdict)}</b></p><table>${htmlRows}</table><p><a href="${escapeHtml(report.shareUrl)}">${escapeHtml(report.shareUrl)}</a></p><p><small>${CAUTIONS.map(escapeHtml).join('<br>')}</small></p>`,
+    });
+    await this.ds.transaction((m) =>
+      audit(m, { actorId: user.id, action: 'fit-report.email', entityType: 'fit_report', entityId: id, data: { to } }),
+    );
+  }
+}
