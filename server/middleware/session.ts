@@ -11,11 +11,12 @@ export function sessionMiddleware({ env, pool }: AppDeps): RequestHandler {
   const PgStore = connectPgSimple(session);
   return session({
     name: SESSION_COOKIE,
-    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+    // No touch on every request: a session lasts one shift from sign-in, and a search costs no session write.
+    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 15 * 60, disableTouch: true }),
     secret: env.SESSION_SECRET,
     resave: false,
     saveUninitialized: false,
-    rolling: true,
+    rolling: false,
     cookie: {
       httpOnly: true,
       sameSite: 'lax',

@@ -45,7 +45,10 @@ export function catalogRoutes(deps: AppDeps): Router {
   });
 
   mount(r, 'GET /api/search', async (req, res) => {
-    res.json(await searchParts(deps.search, parseQuery(searchQuerySchema, req), ds, (await getSettings(ds)).compat));
+    const result = await searchParts(deps.search, parseQuery(searchQuerySchema, req), ds, (await getSettings(ds)).compat);
+    // A shop's technician sees in stock yes/no, not the store's count.
+    if (currentUser(req).role === 'technician') result.hits = result.hits.map(({ onHand: _onHand, ...hit }) => hit);
+    res.json(result);
   });
 
   mount(r, 'GET /api/parts/:id', async (req, res) => {

@@ -56,17 +56,21 @@ const BM25_B = 0.7;
 const PREFIX_WEIGHT = 0.375;
 const TYPO_WEIGHT = 0.45;
 
-function collectText(value: unknown, parts: string[]): void {
-  if (typeof value === 'string') parts.push(value);
-  else if (typeof value === 'number' || typeof value === 'boolean') parts.push(String(value));
-  else if (Array.isArray(value)) for (const item of value) collectText(item, parts);
-  else if (isJsonObject(value)) for (const inner of Object.values(value)) collectText(inner, parts);
+/** Calls `visit` for every word of a field value: strings, numbers, booleans, arrays, objects. */
+function forEachWord(value: unknown, visit: (word: string) => void): void {
+  if (typeof value === 'string') {
+    for (const word of tokenize(value)) visit(word);
+  } else if (typeof value === 'number' || typeof value === 'boolean') {
+    for (const word of tokenize(String(value))) visit(word);
+  } else if (Array.isArray(value)) {
+    for (const item of value) forEachWord(item, visit);
+  } else if (isJsonObject(value)) {
+    for (const inner of Object.values(value)) forEachWord(inner, visit);
+  }
 }
 
-function searchableText(doc: JsonObject, field: string): string {
-  const parts: string[] = [];
-  for (const value of valuesAtPath(doc, field)) collectText(value, parts);
-  return parts.join(' ');
+function forEachFieldWord(doc: JsonObject, field: string, visit: (word: string) => void): void {
+  for (const value of valuesAtPath(doc, field)) forEachWord(value, visit);
 }
 
 export class TextIndex {
@@ -105,29 +109,30 @@ export class TextIndex {
   }
 
   addAll(records: Iterable<DocumentRecord>): void {
-    const perWord = new Map<string, { mask: number; frequency: number }>();
+    // Per document: word -> packed field mask and frequency, without an object per word.
+    const perWord = new Map<string, number>();
+    let bit = 0;
+    let length = 0;
+    const count = (word: string): void => {
+      length++;
+      const seen = perWord.get(word);
+      perWord.set(word, seen === undefined ? packInfo(bit, 1) : packInfo(fieldMaskOf(seen) | bit, frequencyOf(seen) + 1));
+    };
     for (const record of records) {
       this.discard(record.seq);
       const slot = this.recordBySlot.length;
       this.recordBySlot.push(record);
       this.slotBySeq.set(record.seq, slot);
       perWord.clear();
-      let length = 0;
+      length = 0;
       this.fields.forEach((field, rank) => {
-        const bit = fieldBit(rank);
-        for (const word of tokenize(searchableText(record.doc, field))) {
-          length++;
-          const seen = perWord.get(word);
-          if (seen) {
-            seen.mask |= bit;
-            seen.frequency++;
-          } else perWord.set(word, { mask: bit, frequency: 1 });
-        }
+        bit = fieldBit(rank);
+        forEachFieldWord(record.doc, field, count);
       });
-      for (const [word, { mask, frequency }] of perWord) {
+      for (const [word, info] of perWord) {
         const list = this.words.fetch(word);
         list.slots.push(slot);
-        list.infos.push(packInfo(mask, frequency));
+        list.infos.push(info);
       }
       this.lengthBySlot[slot] = length;
       this.totalLength += length;

@@ -1,8 +1,8 @@
 /**
  * Meilisearch's typo rules. Its automata count a transposition as one typo (Damerau) while
- * minisearch's fuzzy search counts plain Levenshtein, so minisearch only proposes candidate words
- * and every candidate is re-checked here. Meilisearch also counts a typo on the first letter as two:
- * with a one-typo budget the first letter must match.
+ * minisearch's radix-tree fuzzy lookup counts plain Levenshtein, so that lookup only proposes
+ * candidate words and every candidate is re-checked here. Meilisearch also counts a typo on the
+ * first letter as two: with a one-typo budget the first letter must match.
  */
 
 export interface TypoBudgetRules {

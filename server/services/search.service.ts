@@ -2,7 +2,9 @@ import type { DataSource } from 'typeorm';
 import type { CompatSettings } from '../../shared/compat';
 import { looksLikePartNumber, normalizePartNumber } from '../../shared/part-number';
 import type { SearchHit, SearchQuery, SearchResponse } from '../../shared/schemas/search';
+import { exactNumberHits } from '../search/exact-number';
 import { FACET_ATTRIBUTES, type PartDocument } from '../search/part-document';
+import { FACET_FIELDS } from '../../shared/schemas/search';
 import { buildFilters } from '../search/filters';
 import { matchReason } from '../search/match-reason';
 import type { PartSearchIndex } from '../search/search-index';
@@ -29,43 +31,45 @@ function toHit(doc: PartDocument, q: string): SearchHit {
  */
 /** Interchange hits carry the verdict of the claim, so a wrong row shows as no-go at the counter. */
 async function withInterchangeChecks(ds: DataSource, hits: SearchHit[], settings: CompatSettings): Promise<SearchHit[]> {
+  const claims = hits.filter((h) => h.matchedBy === 'interchange' && h.matchedNumber);
+  if (!claims.length) return hits;
+  // One query for every claim's foreign part (where the catalog holds its spec).
+  const rows = (await ds.query(
+    `SELECT i.part_id, i.foreign_number_norm, fp.id AS original_part_id
+       FROM interchange i JOIN brand fb ON lower(fb.name) = lower(i.foreign_brand)
+       JOIN part fp ON fp.brand_id = fb.id AND fp.part_number_norm = i.foreign_number_norm
+      WHERE i.part_id = ANY($1::uuid[]) AND i.foreign_number_norm = ANY($2::text[])`,
+    [claims.map((h) => h.partId), claims.map((h) => h.matchedNumber)],
+  )) as { part_id: string; foreign_number_norm: string; original_part_id: string }[];
+  const originals = new Map(rows.map((r) => [`${r.part_id}|${r.foreign_number_norm}`, r.original_part_id]));
   return Promise.all(
     hits.map(async (h) => {
-      if (h.matchedBy !== 'interchange' || !h.matchedNumber) return h;
-      const rows = (await ds.query(
-        `SELECT (SELECT fp.id FROM part fp JOIN brand fb ON fb.id = fp.brand_id
-                  WHERE fp.part_number_norm = i.foreign_number_norm AND lower(fb.name) = lower(i.foreign_brand) LIMIT 1) AS original_part_id
-           FROM interchange i WHERE i.foreign_number_norm = $1 AND i.part_id = $2 LIMIT 1`,
-        [h.matchedNumber, h.partId],
-      )) as { original_part_id: string | null }[];
-      const check = await interchangeVerdict(
-        ds,
-        { foreignNumberNorm: h.matchedNumber, originalPartId: rows[0]?.original_part_id ?? null, partId: h.partId },
-        settings,
-      );
-      return {
-        ...h,
-        check: check && {
-          verdict: check.verdict,
-          engine: check.engine,
-          concerns: check.concerns.map((c) => ({ id: c.id, verdict: c.verdict, reason: c.reason })),
-        },
-      };
+      const originalPartId = h.matchedBy === 'interchange' ? originals.get(`${h.partId}|${h.matchedNumber}`) : undefined;
+      if (!originalPartId || !h.matchedNumber) return h;
+      const check = await interchangeVerdict(ds, { foreignNumberNorm: h.matchedNumber, originalPartId, partId: h.partId }, settings);
+      return { ...h, check: check && { verdict: check.verdict, engine: check.engine, concerns: check.concerns.map((c) => ({ id: c.id, verdict: c.verdict, reason: c.reason })) } };
     }),
   );
 }
 
-export async function searchParts(
-  index: PartSearchIndex,
-  query: SearchQuery,
-  ds: DataSource,
-  settings: CompatSettings,
-): Promise<SearchResponse> {
-  const filter = buildFilters(query);
-  const base = { filter, facets: FACET_ATTRIBUTES, limit: query.limit, offset: query.offset };
+/** Facet counts cost time on every hit: all of them for spec search, kind and brand for text, none for a number. */
+function facetsFor(query: SearchQuery, numberLike: boolean): string[] {
+  const specSearch = query.q.trim() === '' || FACET_FIELDS.some((f) => query[f] !== undefined);
+  if (specSearch) return FACET_ATTRIBUTES;
+  return numberLike ? [] : ['kind', 'brand'];
+}
+
+export async function searchParts(index: PartSearchIndex, query: SearchQuery, ds: DataSource, settings: CompatSettings): Promise<SearchResponse> {
   const raw = query.q.trim();
-  let res = await index.index.search(looksLikePartNumber(raw) ? normalizePartNumber(raw) : raw, base);
-  if (res.hits.length === 0 && looksLikePartNumber(raw)) res = await index.index.search(raw, base);
+  const numberLike = looksLikePartNumber(raw);
+  const filtered = query.kind !== undefined || FACET_FIELDS.some((f) => query[f] !== undefined);
+  if (numberLike && !filtered && query.offset === 0) {
+    const exact = await exactNumberHits(ds, normalizePartNumber(raw), query.limit);
+    if (exact.length) return { hits: await withInterchangeChecks(ds, exact, settings), total: exact.length, facets: {} };
+  }
+  const base = { filter: buildFilters(query), facets: facetsFor(query, numberLike), limit: query.limit, offset: query.offset };
+  let res = await index.index.search(numberLike ? normalizePartNumber(raw) : raw, base);
+  if (res.hits.length === 0 && numberLike) res = await index.index.search(raw, base);
   return {
     hits: await withInterchangeChecks(
       ds,

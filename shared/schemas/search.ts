@@ -44,7 +44,8 @@ export const searchHitSchema = z.object({
   matchedBy: z.enum(MATCHED_BY),
   matchedNumber: z.string().nullable(),
   inStock: z.boolean(),
-  onHand: z.number().int(),
+  /** The store's count: absent for technicians, who see in stock yes/no only. */
+  onHand: z.number().int().optional(),
   hasSpec: z.boolean(),
   /** For a hit found through interchange: the verdict of the foreign part's spec against ours. */
   check: z

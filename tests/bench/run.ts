@@ -3,13 +3,23 @@ import { runParseBench } from './price-list-parse';
 import { runSearchBench } from './search-bench';
 
 /** `npm run bench`: figures measured side by side in one run; no test asserts a timing. */
+// `tsx tests/bench/run.ts search` runs one part; no argument runs them all.
+const only = process.argv[2];
+const wanted = (name: string) => !only || only === name;
+
 async function main(): Promise<void> {
-  console.log('== compatibility ranking (in-process)');
-  await runCompatRankBench();
-  console.log('\n== price-list parsing (csv-parse + validation, no database)');
-  await runParseBench();
-  console.log('\n== search');
-  await runSearchBench();
+  if (wanted('compat')) {
+    console.log('== compatibility ranking (in-process)');
+    await runCompatRankBench();
+  }
+  if (wanted('parse')) {
+    console.log('\n== price-list parsing (csv-parse + validation, no database)');
+    await runParseBench();
+  }
+  if (wanted('search')) {
+    console.log('\n== search');
+    await runSearchBench();
+  }
 }
 
 main()

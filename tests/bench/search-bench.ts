@@ -1,14 +1,8 @@
-import 'reflect-metadata';
-import type { AddressInfo } from 'node:net';
+import { spawn } from 'node:child_process';
 import autocannon from 'autocannon';
 import pg from 'pg';
 import { normalizePartNumber } from '../../shared/part-number';
-import { createApp } from '../../server/app';
-import { buildDeps, closeDeps } from '../../server/bootstrap';
-import { loadEnv } from '../../server/config/env';
-import { startLocalServices } from '../../server/local-services';
-import { seedAll } from '../../seed/seed-all';
-import { scaleForeignNumber, scalePartNumber, seedScale } from '../../seed/scale';
+import { scaleForeignNumber, scalePartNumber } from '../../seed/scale';
 import { fmt, summarise, type LatencySummary } from './stats';
 
 const CONNECTIONS = 20;
@@ -62,24 +56,28 @@ async function sqlLookup(url: string, numbers: string[]): Promise<LatencySummary
   return summarise(latencies, SECONDS);
 }
 
+/** Starts tests/bench/bench-server.ts in a child process and waits for its port. */
+async function startServer(): Promise<{ base: string; indexed: number; indexMs: number; stop(): void }> {
+  const child = spawn('npx', ['tsx', 'tests/bench/bench-server.ts'], { stdio: ['ignore', 'pipe', 'inherit'], env: process.env });
+  const line = await new Promise<string>((resolve, reject) => {
+    let buf = '';
+    child.stdout.on('data', (d: Buffer) => {
+      buf += d.toString();
+      const m = /READY .*/.exec(buf);
+      if (m) resolve(m[0]);
+    });
+    child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
+  });
+  const [, port, indexed, ms] = line.trim().split(' ');
+  return { base: `http://127.0.0.1:${port}`, indexed: Number(indexed), indexMs: Number(ms), stop: () => child.kill('SIGTERM') };
+}
+
 export async function runSearchBench(): Promise<void> {
   const databaseUrl = process.env.DATABASE_URL;
   if (!databaseUrl) throw new Error('DATABASE_URL is not set (npm run bench sets it)');
-  const local = await startLocalServices({ ...process.env, SMTP_URL: undefined, MEILI_HOST: undefined });
-  const env = loadEnv({ ...process.env, ...local.env, PORT: '0', NODE_ENV: 'production', LOGIN_MAX_PER_ADDRESS: '1000' });
-  const deps = await buildDeps(env);
-  await seedAll(deps.dataSource);
-  const scale = await seedScale(databaseUrl);
-  if (scale.parts)
-    console.log(`  scale data generated: ${scale.parts} parts, ${scale.interchange} interchange rows in ${(scale.ms / 1000).toFixed(1)} s`);
-  const t0 = Date.now();
-  const indexed = await deps.search.rebuild(deps.dataSource);
-  console.log(`  index rebuilt from PostgreSQL: ${indexed} documents in ${((Date.now() - t0) / 1000).toFixed(1)} s`);
-
-  const app = createApp(deps);
-  const server = app.listen(0, '127.0.0.1');
-  await new Promise((r) => server.once('listening', r));
-  const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  const srv = await startServer();
+  const { base, indexed } = srv;
+  console.log(`  index rebuilt from PostgreSQL: ${indexed} documents in ${(srv.indexMs / 1000).toFixed(1)} s`);
   const csrf = await fetch(`${base}/api/auth/csrf`);
   const csrfCookie = csrf.headers
     .getSetCookie()
@@ -116,8 +114,5 @@ export async function runSearchBench(): Promise<void> {
   console.log(row('bare SQL number lookup', sql));
   console.log(`  ratio p95 numbers / SQL: ${(byNumber.p95 / sql.p95).toFixed(2)} × (goal ≤ 3 ×, p95 ≤ 25 ms)`);
 
-  server.close();
-  server.closeAllConnections();
-  await closeDeps(deps);
-  await local.close();
+  srv.stop();
 }

@@ -1,4 +1,4 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import { useId, type InputHTMLAttributes, type ReactNode, type Ref, type SelectHTMLAttributes } from 'react';
 
 const CONTROL =
   'w-full rounded-md border border-ink/20 bg-paper-raised px-2.5 py-1.5 text-[15px] text-ink placeholder:text-ink-faint focus:border-accent';
@@ -8,7 +8,7 @@ export function TextField({
   hint,
   error,
   ...props
-}: InputHTMLAttributes<HTMLInputElement> & { label: string; hint?: ReactNode; error?: string | undefined }) {
+}: InputHTMLAttributes<HTMLInputElement> & { label: string; hint?: ReactNode; error?: string | undefined; ref?: Ref<HTMLInputElement> }) {
   const id = useId();
   return (
     <div className="flex flex-col gap-1">
@@ -24,9 +24,10 @@ export function TextField({
 
 export function SelectField({
   label,
+  hint,
   children,
   ...props
-}: SelectHTMLAttributes<HTMLSelectElement> & { label: string; children: ReactNode }) {
+}: SelectHTMLAttributes<HTMLSelectElement> & { label: string; hint?: ReactNode; children: ReactNode }) {
   const id = useId();
   return (
     <div className="flex flex-col gap-1">
@@ -36,6 +37,7 @@ export function SelectField({
       <select id={id} {...props} className={`${CONTROL} ${props.className ?? ''}`}>
         {children}
       </select>
+      {hint && <p className="text-xs text-ink-faint">{hint}</p>}
     </div>
   );
 }

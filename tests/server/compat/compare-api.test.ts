@@ -46,7 +46,7 @@ describe('POST /api/compat/coil and /plug', () => {
   });
   afterAll(() => t.close());
 
-  const post = (path: string, body: unknown) => tech.agent.post(path).set('x-csrf-token', tech.token).send(body);
+  const post = (path: string, body: object) => tech.agent.post(path).set('x-csrf-token', tech.token).send(body);
 
   it('compares a demo coil with its alternates: go, review on energy, no-go on the connector (seed/data/alternates.ts)', async () => {
     const expectations: [string, CompatResult['verdict'], string | null][] = [
@@ -141,7 +141,7 @@ describe('POST /api/compat/coil and /plug', () => {
   });
 
   it('bad input is a 400 naming the field, never a verdict from nonsense', async () => {
-    const cases: [unknown, string][] = [
+    const cases: [object, string][] = [
       [
         {
           original: { spec: { ...TYPED_COIL, primaryOhmMin: 0.9, primaryOhmMax: 0.5 } },

@@ -234,6 +234,11 @@ describe('search stand-in contract (meilisearch SDK)', () => {
     expect(result.estimatedTotalHits).toBe(0);
   });
 
+  it('counts a typo on the first letter as two, so a six-character word cannot have one', async () => {
+    const result = await parts.search('XX7731');
+    expect(result.hits).toEqual([]);
+  });
+
   it('filters with =, !=, IN, NOT IN and TO', async () => {
     const equal = await parts.search('', { filter: 'brand = Telrix' });
     expect(sortedIds(equal.hits)).toEqual(expectedIds((p) => p.brand === 'Telrix'));
@@ -317,6 +322,13 @@ describe('search stand-in contract (meilisearch SDK)', () => {
     expect(beyond.estimatedTotalHits).toBe(PARTS.length);
     const defaults = await parts.search('');
     expect(defaults.limit).toBe(20);
+  });
+
+  it('pages with page and hitsPerPage and reports totalHits and totalPages', async () => {
+    const byPrice = [...PARTS].sort((a, b) => a.priceCents - b.priceCents).map((p) => p.id);
+    const page = await parts.search('', { sort: ['priceCents:asc'], page: 2, hitsPerPage: 3 });
+    expect(ids(page.hits)).toEqual(byPrice.slice(3, 6));
+    expect(page).toMatchObject({ page: 2, hitsPerPage: 3, totalHits: PARTS.length, totalPages: 4 });
   });
 
   it('returns only the asked attributes', async () => {
