@@ -8,6 +8,10 @@ import { InterchangeEntity } from './interchange.entity';
 import { InvitationEntity } from './invitation.entity';
 import { PartEntity } from './part.entity';
 import { PlugSpecEntity } from './plug-spec.entity';
+import { PriceListFileChunkEntity } from './price-list-file-chunk.entity';
+import { PriceListRowErrorEntity } from './price-list-row-error.entity';
+import { PriceListRowEntity } from './price-list-row.entity';
+import { PriceListEntity } from './price-list.entity';
 import { SettingEntity } from './setting.entity';
 import { ShopEntity } from './shop.entity';
 import { StockEntity } from './stock.entity';
@@ -54,4 +58,5 @@ export const ENTITIES = [
   StockEntity,
   SupplierEntity,
   SupplierPriceEntity,
+  ...[PriceListEntity, PriceListRowEntity, PriceListRowErrorEntity, PriceListFileChunkEntity],
 ];

@@ -1,7 +1,109 @@
+import { rm } from 'node:fs/promises';
 import { Router } from 'express';
+import { idParamSchema } from '../../shared/schemas/auth';
+import {
+  previewPriceListBodySchema,
+  priceListChangesQuerySchema,
+  priceListErrorsQuerySchema,
+  priceListHistoryQuerySchema,
+  uploadPriceListFieldsSchema,
+} from '../../shared/schemas/price-list';
 import type { AppDeps } from '../deps';
+import { AppError } from '../errors';
+import { currentUser } from '../middleware/auth';
+import { parseBody, parseParams, parseQuery } from '../middleware/validate';
+import { commitPriceList } from '../services/price-list/commit';
+import { writeErrorsCsv } from '../services/price-list/errors-csv';
+import { followCommit } from '../services/price-list/follow-up';
+import { discardPriceList, previewPriceList, uploadPriceList } from '../services/price-list/intake.service';
+import { getPriceList, listChanges, listPriceLists, listRowErrors } from '../services/price-list/queries';
+import { cleanFileName, receivePriceListUpload } from '../services/price-list/upload';
+import { getSettings } from '../services/settings.service';
+import { mount } from './mount';
 
-/** Supplier price-list intake: upload, preview, commit, discard, history (being built). */
-export function priceListRoutes(_deps: AppDeps): Router {
-  return Router();
+/** Supplier price-list intake: upload, preview, commit, discard, history. */
+export function priceListRoutes(deps: AppDeps): Router {
+  const r = Router();
+  const ds = deps.dataSource;
+
+  async function intakeSettings(): Promise<{ maxFileBytes: number; flagThresholdPct: number }> {
+    const { priceList } = await getSettings(ds);
+    return { maxFileBytes: Math.round(priceList.maxFileMb * 1024 * 1024), flagThresholdPct: priceList.flagThresholdPct };
+  }
+
+  mount(r, 'GET /api/price-lists', async (req, res) => {
+    res.json(await listPriceLists(ds, parseQuery(priceListHistoryQuerySchema, req)));
+  });
+
+  // Processed inside the request; a concurrent GET /api/price-lists/:id (with the client's uploadId) shows the progress.
+  mount(r, 'POST /api/price-lists', async (req, res) => {
+    const settings = await intakeSettings();
+    await receivePriceListUpload(req, res, settings.maxFileBytes);
+    const file = req.file;
+    try {
+      const fields = parseBody(uploadPriceListFieldsSchema, req);
+      if (!file) throw AppError.badRequest('file: choose a CSV file to upload', [{ field: 'file', message: 'required' }]);
+      const list = await uploadPriceList(deps, {
+        supplierId: fields.supplierId,
+        fileName: cleanFileName(file.originalname),
+        filePath: file.path,
+        sizeBytes: file.size,
+        mapping: fields.mapping,
+        id: fields.uploadId,
+        actorId: currentUser(req).id,
+        ...settings,
+      });
+      res.status(201).json(list);
+    } finally {
+      if (file) await rm(file.path, { force: true });
+    }
+  });
+
+  mount(r, 'GET /api/price-lists/:id', async (req, res) => {
+    const { id } = parseParams(idParamSchema, req);
+    res.json(await getPriceList(ds, id));
+  });
+
+  mount(r, 'GET /api/price-lists/:id/changes', async (req, res) => {
+    const { id } = parseParams(idParamSchema, req);
+    res.json(await listChanges(ds, id, parseQuery(priceListChangesQuerySchema, req)));
+  });
+
+  mount(r, 'GET /api/price-lists/:id/errors', async (req, res) => {
+    const { id } = parseParams(idParamSchema, req);
+    res.json(await listRowErrors(ds, id, parseQuery(priceListErrorsQuerySchema, req)));
+  });
+
+  mount(r, 'GET /api/price-lists/:id/errors.csv', async (req, res) => {
+    const { id } = parseParams(idParamSchema, req);
+    const list = await getPriceList(ds, id);
+    const base = list.fileName.replace(/\.[^.]*$/, '') || 'price-list';
+    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+    res.setHeader(
+      'Content-Disposition',
+      `attachment; filename="${base.replace(/[^\w.-]+/g, '_')}-rejected.csv"; filename*=UTF-8''${encodeURIComponent(`${base}-rejected.csv`)}`,
+    );
+    await writeErrorsCsv(ds, id, res);
+    res.end();
+  });
+
+  mount(r, 'POST /api/price-lists/:id/preview', async (req, res) => {
+    const { id } = parseParams(idParamSchema, req);
+    const body = parseBody(previewPriceListBodySchema, req);
+    res.json(await previewPriceList(deps, { id, mapping: body.mapping, ...(await intakeSettings()) }));
+  });
+
+  mount(r, 'POST /api/price-lists/:id/commit', async (req, res) => {
+    const { id } = parseParams(idParamSchema, req);
+    const outcome = await commitPriceList(ds, id, currentUser(req).id);
+    const notices = await followCommit(deps, id, outcome);
+    res.json({ ...(await getPriceList(ds, id)), notices });
+  });
+
+  mount(r, 'POST /api/price-lists/:id/discard', async (req, res) => {
+    const { id } = parseParams(idParamSchema, req);
+    res.json(await discardPriceList(ds, id, currentUser(req).id));
+  });
+
+  return r;
 }

@@ -11,8 +11,14 @@ const ALL: readonly Role[] = ['clerk', 'technician', 'buyer', 'admin'];
 
 export const NAV_ITEMS: NavItem[] = [
   { to: '/counter', label: 'Counter', roles: ALL },
+  { to: '/compare', label: 'Compare', roles: ALL },
+  { to: '/bench', label: 'Bench test', roles: ['technician', 'clerk', 'buyer', 'admin'] },
+  { to: '/fit-reports', label: 'Fit reports', roles: ALL },
+  { to: '/price-lists', label: 'Price lists', roles: ['buyer', 'admin'] },
+  { to: '/suppliers', label: 'Suppliers', roles: ['buyer', 'admin'] },
   { to: '/team', label: 'Team', roles: ['admin'] },
   { to: '/outbox', label: 'Outbox', roles: ['admin'] },
+  { to: '/settings', label: 'Settings', roles: ['admin'] },
 ];
 
 export const navFor = (role: Role): NavItem[] => NAV_ITEMS.filter((i) => i.roles.includes(role));

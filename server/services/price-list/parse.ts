@@ -1,7 +1,14 @@
 import { Readable, pipeline } from 'node:stream';
 import { CsvError, parse } from 'csv-parse';
 import { PRICE_LIST_LIMITS } from '../../../shared/price-list/fields';
-import { guessMapping, validateMapping, type Mapping, type ResolvedMapping } from '../../../shared/price-list/mapping';
+import {
+  applyRememberedMapping,
+  guessMapping,
+  validateMapping,
+  type Mapping,
+  type MappingProblem,
+  type ResolvedMapping,
+} from '../../../shared/price-list/mapping';
 import { RowValidator, type NormalisedRow, type RowError } from '../../../shared/price-list/row';
 import { createDecodeStream, PriceListFileError, type PriceListDecoder, type TextEncodingName } from './decode';
 import { detectDelimiter, type Delimiter } from './delimiter';
@@ -11,6 +18,8 @@ export { PriceListFileError } from './decode';
 export interface ParseOptions {
   /** The buyer's mapping; without one, the mapping is guessed from the headers. */
   mapping?: Mapping;
+  /** The supplier's mapping from an earlier file, carried onto these headers when no mapping is given. */
+  rememberedMapping?: Mapping;
   maxFieldChars?: number;
   maxFileBytes?: number;
   maxRecordChars?: number;
@@ -29,8 +38,12 @@ export interface PriceListHead {
   bom: boolean;
   mapping: Mapping;
   mappingGuessed: boolean;
+  /** Where the mapping came from: the caller, the supplier's remembered one, or the headers alone. */
+  mappingSource: MappingSource;
   resolved: ResolvedMapping;
 }
+
+export type MappingSource = 'given' | 'remembered' | 'guessed';
 
 export interface RejectedLine {
   line: number;
@@ -64,7 +77,10 @@ export interface PriceListSummary {
 }
 
 export type PriceListEvent =
-  { type: 'row'; row: NormalisedRow } | { type: 'rejected'; line: number; errors: RowError[] } | { type: 'end'; summary: PriceListSummary };
+  | { type: 'row'; row: NormalisedRow }
+  /** `cells` as read from the file, for the rejected-rows download. */
+  | { type: 'rejected'; line: number; errors: RowError[]; cells: readonly string[] }
+  | { type: 'end'; summary: PriceListSummary };
 
 export interface PriceListParse {
   head: PriceListHead;
@@ -305,15 +321,35 @@ function checkHeaders(headers: string[], maxColumns: number): void {
   }
 }
 
-function resolve(headers: string[], given: Mapping | undefined): { mapping: Mapping; resolved: ResolvedMapping } {
-  const mapping = given ?? guessMapping(headers);
-  const check = validateMapping(headers, mapping);
-  if (check.ok) return { mapping, resolved: check.resolved };
-  const missing = check.problems.some((p) => p.code === 'missing-required');
-  throw new PriceListFileError(missing ? 'missing-column' : 'invalid-mapping', check.problems.map((p) => p.message).join('; '), {
+/**
+ * The given mapping, else the remembered one carried onto these headers, else the guess. A
+ * remembered mapping that no longer fits (the supplier changed its layout) gives way to the guess;
+ * a refusal names the first candidate tried.
+ */
+function resolve(
+  headers: string[],
+  opts: Pick<ParseOptions, 'mapping' | 'rememberedMapping'>,
+): { mapping: Mapping; resolved: ResolvedMapping; mappingSource: MappingSource } {
+  const candidates: { mapping: Mapping; mappingSource: MappingSource }[] = opts.mapping
+    ? [{ mapping: opts.mapping, mappingSource: 'given' }]
+    : [
+        ...(opts.rememberedMapping
+          ? [{ mapping: applyRememberedMapping(headers, opts.rememberedMapping), mappingSource: 'remembered' as const }]
+          : []),
+        { mapping: guessMapping(headers), mappingSource: 'guessed' },
+      ];
+  let firstProblems: MappingProblem[] | null = null;
+  for (const { mapping, mappingSource } of candidates) {
+    const check = validateMapping(headers, mapping);
+    if (check.ok) return { mapping, resolved: check.resolved, mappingSource };
+    firstProblems ??= check.problems;
+  }
+  const problems = firstProblems ?? [];
+  const missing = problems.some((p) => p.code === 'missing-required');
+  throw new PriceListFileError(missing ? 'missing-column' : 'invalid-mapping', problems.map((p) => p.message).join('; '), {
     headers,
-    mapping,
-    problems: check.problems,
+    mapping: candidates[0]?.mapping,
+    problems,
   });
 }
 
@@ -321,16 +357,23 @@ function resolve(headers: string[], given: Mapping | undefined): { mapping: Mapp
 async function readHead(
   reader: LineReader,
   opts: ParseOptions,
-): Promise<{ headers: string[]; headerLine: number; mapping: Mapping; resolved: ResolvedMapping; first: Line }> {
+): Promise<{
+  headers: string[];
+  headerLine: number;
+  mapping: Mapping;
+  mappingSource: MappingSource;
+  resolved: ResolvedMapping;
+  first: Line;
+}> {
   const header = await reader.read();
   if (header === null) throw new PriceListFileError('empty', 'The file has no header and no rows.');
   reader.blankLines = 0;
   const headers = header.cells.map((h, i) => (i === 0 ? h.replace(/^\uFEFF/, '') : h).trim());
   checkHeaders(headers, PRICE_LIST_LIMITS.maxColumns);
-  const { mapping, resolved } = resolve(headers, opts.mapping);
+  const { mapping, resolved, mappingSource } = resolve(headers, opts);
   const first = await reader.read();
   if (first === null) throw new PriceListFileError('header-only', 'The file has a header but no rows.', { headers });
-  return { headers, headerLine: header.line, mapping, resolved, first };
+  return { headers, headerLine: header.line, mapping, mappingSource, resolved, first };
 }
 
 /**
@@ -396,7 +439,7 @@ export async function parsePriceList(input: Readable | Buffer, opts: ParseOption
           yield { type: 'row', row: result.row };
         } else {
           const errors = result.ok ? [] : result.errors;
-          yield { type: 'rejected', line: record.line, errors: duplicate ? [...errors, duplicate] : errors };
+          yield { type: 'rejected', line: record.line, errors: duplicate ? [...errors, duplicate] : errors, cells: record.cells };
         }
         if (dataLines % PROGRESS_EVERY === 0) opts.onProgress?.(dataLines, decoder.bytesRead);
       }

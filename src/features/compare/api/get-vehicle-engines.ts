@@ -1,0 +1,23 @@
+import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '@/lib/api-client';
+import { compareKeys } from './keys';
+
+const vehicleEngineSchema = z.object({ id: z.string(), code: z.string(), label: z.string() });
+export type VehicleEngine = z.infer<typeof vehicleEngineSchema>;
+
+const enginesResponseSchema = z.object({ engines: z.array(vehicleEngineSchema) });
+
+export const getVehicleEngines = async (year: number, make: string, model: string): Promise<VehicleEngine[]> =>
+  (await api('GET', `/api/vehicles/engines?${new URLSearchParams({ year: String(year), make, model })}`, { schema: enginesResponseSchema }))
+    .engines;
+
+export const vehicleEnginesQueryOptions = (year: number | null, make: string | null, model: string | null) =>
+  queryOptions({
+    queryKey: compareKeys.engines(year ?? 0, make ?? '', model ?? ''),
+    queryFn: year === null || make === null || model === null ? skipToken : () => getVehicleEngines(year, make, model),
+    staleTime: Infinity,
+  });
+
+export const useVehicleEngines = (year: number | null, make: string | null, model: string | null) =>
+  useQuery(vehicleEnginesQueryOptions(year, make, model));

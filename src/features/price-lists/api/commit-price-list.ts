@@ -1,0 +1,22 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { commitPriceListResponseSchema } from '@shared/schemas/price-list';
+import { api } from '@/lib/api-client';
+import { priceListKeys } from './keys';
+
+export const commitPriceList = ({ id }: { id: string; supplierId: string }) =>
+  api('POST', `/api/price-lists/${encodeURIComponent(id)}/commit`, { schema: commitPriceListResponseSchema });
+
+export function useCommitPriceList() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: commitPriceList,
+    onSuccess: (committed, { supplierId }) => {
+      const { notices: _notices, ...list } = committed;
+      qc.setQueryData(priceListKeys.detail(list.id), list);
+      // Committing makes the supplier's other staged lists stale, so the history changes too.
+      void qc.invalidateQueries({ queryKey: priceListKeys.history(supplierId) });
+    },
+    // A refusal (the list went stale, the same file was committed) may change what the list shows.
+    onError: (_err, { id }) => qc.invalidateQueries({ queryKey: priceListKeys.detail(id) }),
+  });
+}

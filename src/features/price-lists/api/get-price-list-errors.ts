@@ -1,0 +1,27 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { priceListErrorsSchema } from '@shared/schemas/price-list';
+import { api } from '@/lib/api-client';
+import { priceListKeys } from './keys';
+
+export interface ErrorsPage {
+  id: string;
+  offset: number;
+  limit: number;
+}
+
+export const getPriceListErrors = ({ id, offset, limit }: ErrorsPage) =>
+  api('GET', `/api/price-lists/${encodeURIComponent(id)}/errors?${new URLSearchParams({ offset: String(offset), limit: String(limit) })}`, {
+    schema: priceListErrorsSchema,
+  });
+
+export const priceListErrorsQueryOptions = (page: ErrorsPage) =>
+  queryOptions({
+    queryKey: priceListKeys.errors(page.id, page.offset, page.limit),
+    queryFn: () => getPriceListErrors(page),
+    placeholderData: keepPreviousData,
+  });
+
+export const usePriceListErrors = (page: ErrorsPage) => useQuery(priceListErrorsQueryOptions(page));
+
+/** The rejected rows as CSV, for a plain download link. */
+export const priceListErrorsCsvUrl = (id: string): string => `/api/price-lists/${encodeURIComponent(id)}/errors.csv`;

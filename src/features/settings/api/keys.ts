@@ -1,0 +1,1 @@
+export const settingsKeys = { all: ['settings'] as const };

@@ -1,0 +1,3 @@
+export const supplierKeys = {
+  all: ['suppliers'] as const,
+};

@@ -1,0 +1,15 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { supplierSchema, type UpdateSupplierBody } from '@shared/schemas/price-list';
+import { api } from '@/lib/api-client';
+import { supplierKeys } from './keys';
+
+const supplierResponseSchema = z.object({ supplier: supplierSchema });
+
+export const updateSupplier = async ({ id, ...body }: UpdateSupplierBody & { id: string }) =>
+  (await api('PATCH', `/api/suppliers/${encodeURIComponent(id)}`, { body, schema: supplierResponseSchema })).supplier;
+
+export function useUpdateSupplier() {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: updateSupplier, onSuccess: () => qc.invalidateQueries({ queryKey: supplierKeys.all }) });
+}

@@ -1,0 +1,156 @@
+import { createHash, randomUUID } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { z } from 'zod';
+import { priceListHistorySchema, supplierSchema } from '@shared/schemas/price-list';
+import { openBrowser, signInAs, type BrowserSession } from './browser';
+
+const CLEAN = path.resolve(import.meta.dirname, '../../seed/csv/supplier-a-clean.csv');
+const BAD_ROWS = path.resolve(import.meta.dirname, '../../seed/csv/supplier-a-bad-rows.csv');
+const CLEAN_SHA256 = createHash('sha256').update(readFileSync(CLEAN)).digest('hex');
+// seed/data/suppliers.ts
+const PELLWORTH = 'Pellworth Distribution';
+
+/** GET from inside the page, with the buyer's session, as the app itself would. */
+async function apiGet(s: BrowserSession, url: string): Promise<unknown> {
+  return s.page.evaluate(async (u) => {
+    const res = await fetch(u, { credentials: 'same-origin' });
+    return res.json() as Promise<unknown>;
+  }, url);
+}
+
+async function countOf(s: BrowserSession, label: string): Promise<string> {
+  const tile = s.page
+    .getByLabel('Preview counts')
+    .locator('div')
+    .filter({ has: s.page.locator('dt', { hasText: label }) });
+  return (await tile.locator('dd').first().textContent()) ?? '';
+}
+
+describe('journey 6: price-list intake', () => {
+  let s: BrowserSession;
+  beforeEach(async () => {
+    s = await openBrowser();
+  });
+  afterEach(async () => {
+    await s.close();
+  });
+
+  it('a buyer drops the clean Pellworth file, confirms the mapping, previews, commits, and the Counter shows the new price', async () => {
+    await signInAs(s, 'buyer@harborlane.test');
+    await s.page.getByRole('heading', { name: 'Counter' }).waitFor();
+    const nav = s.page.getByRole('navigation', { name: 'Main' });
+    await nav.getByRole('link', { name: 'Price lists' }).click();
+    await s.page.getByRole('heading', { name: 'Price lists' }).waitFor();
+
+    // The browser suite shares one database: when an earlier run already committed this file for
+    // Pellworth, the same file is refused (409), so the journey goes on with a new supplier.
+    const { suppliers } = z.object({ suppliers: z.array(supplierSchema) }).parse(await apiGet(s, '/api/suppliers'));
+    const pellworth = suppliers.find((x) => x.name === PELLWORTH);
+    expect(pellworth).toBeDefined();
+    const history = priceListHistorySchema.parse(await apiGet(s, `/api/price-lists?supplierId=${pellworth!.id}`));
+    const alreadyCommitted = history.priceLists.some((l) => l.sha256 === CLEAN_SHA256 && l.status === 'committed');
+    let supplierName = PELLWORTH;
+    if (alreadyCommitted) {
+      supplierName = `Pellworth test ${randomUUID().slice(0, 6)}`;
+      await nav.getByRole('link', { name: 'Suppliers' }).click();
+      const form = s.page.getByRole('form', { name: 'Add a supplier' });
+      await form.getByLabel('Name').fill(supplierName);
+      await form.getByLabel('Contact e-mail').fill('orders@example.test');
+      await form.getByRole('button', { name: 'Add supplier' }).click();
+      await s.page.getByRole('cell', { name: supplierName, exact: true }).waitFor();
+      await nav.getByRole('link', { name: 'Price lists' }).click();
+    }
+
+    await s.page.getByLabel('Supplier', { exact: true }).selectOption({ label: supplierName });
+    await s.page.getByLabel('Price-list file').setInputFiles(CLEAN);
+
+    // The mapping, guessed from the headers: the buyer checks it and applies it.
+    const columns = s.page.locator('section').filter({ has: s.page.getByRole('heading', { name: 'Columns' }) });
+    await columns.getByRole('button', { name: 'Apply mapping' }).waitFor();
+    expect(await columns.getByLabel('Part Number', { exact: true }).inputValue()).toBe('partNumber');
+    expect(await columns.getByLabel('Brand', { exact: true }).inputValue()).toBe('brand');
+    expect(await columns.getByLabel('Cost', { exact: true }).inputValue()).toBe('cost');
+    expect(await columns.getByLabel('List', { exact: true }).inputValue()).toBe('list');
+    expect(await columns.getByLabel('Supersedes', { exact: true }).inputValue()).toBe('supersedes');
+    await s.shot('price-lists-mapping');
+    await columns.getByRole('button', { name: 'Apply mapping' }).click();
+    await s.page.getByRole('progressbar', { name: 'Reading the file again' }).waitFor({ state: 'detached' });
+    await columns.getByRole('button', { name: 'Apply mapping' }).waitFor();
+
+    // The preview, as seed/csv/README.md states it.
+    expect(await countOf(s, 'Rows in file')).toBe('40');
+    expect(await countOf(s, 'Rejected rows')).toBe('0');
+    if (!alreadyCommitted) {
+      expect(await countOf(s, 'New parts')).toBe('4');
+      expect(await countOf(s, 'Price changes')).toBe('5');
+      expect(await countOf(s, 'Unchanged')).toBe('31');
+      const changes = s.page.getByRole('tabpanel');
+      const row = changes.getByRole('row').filter({ hasText: 'NR/IR 2208' });
+      await row.waitFor();
+      expect(await row.textContent()).toMatch(/\$6\.40.*\$7\.60.*\+18\.8%.*\$14\.99.*\$16\.99/);
+      expect(await row.getByText('Flagged').count()).toBe(1);
+      expect(await changes.getByText('Flagged').count()).toBe(1);
+    }
+    await s.shot('price-lists-preview');
+
+    await s.page.getByRole('tab', { name: /Supersessions/ }).click();
+    await s.page.getByRole('tabpanel').getByRole('row').filter({ hasText: 'QW-IC 3161' }).waitFor();
+
+    await s.page.getByRole('button', { name: 'Commit 40 rows' }).click();
+    await s.page.getByRole('status').filter({ hasText: 'Committed supplier-a-clean.csv' }).waitFor();
+    await s.shot('price-lists-committed');
+    const historyRow = s.page.getByRole('row').filter({ hasText: 'supplier-a-clean.csv' }).filter({ hasText: 'committed' });
+    expect(await historyRow.count()).toBe(1);
+    expect(await historyRow.textContent()).toContain(CLEAN_SHA256.slice(0, 12));
+
+    // The same file again for the same supplier is refused whole, before anything is staged.
+    await s.page.getByRole('button', { name: 'Upload another file' }).click();
+    await s.page.getByLabel('Price-list file').setInputFiles(CLEAN);
+    await s.page
+      .getByRole('alert')
+      .filter({ hasText: /same file \(supplier-a-clean\.csv\) was committed for this supplier/ })
+      .waitFor();
+    await s.shot('price-lists-same-file-refused');
+
+    // The file with bad rows: seven rejected with line, column and reason; the buyer discards it.
+    await s.page.getByLabel('Price-list file').setInputFiles(BAD_ROWS);
+    await s.page.getByRole('button', { name: 'Commit 9 rows' }).waitFor();
+    expect(await countOf(s, 'Rows in file')).toBe('16');
+    expect(await countOf(s, 'Rejected rows')).toBe('7');
+    await s.page.getByRole('tab', { name: /Rejected rows/ }).click();
+    const rejected = s.page.getByRole('tabpanel');
+    const gtinRow = rejected.getByRole('row').filter({ has: s.page.getByRole('cell', { name: '8', exact: true }) });
+    expect(await gtinRow.textContent()).toMatch(/GTIN.*check digit/);
+    expect(
+      await rejected
+        .getByRole('row')
+        .filter({ has: s.page.getByRole('cell', { name: '5', exact: true }) })
+        .textContent(),
+    ).toContain('Part Number');
+    expect(await rejected.getByRole('link', { name: 'Download rejected rows (CSV)' }).getAttribute('href')).toMatch(/\/errors\.csv$/);
+    await s.shot('price-lists-rejected-rows');
+    await s.page.getByRole('button', { name: 'Discard' }).click();
+    await s.page.getByRole('button', { name: 'Yes, discard' }).click();
+    await s.page.getByRole('status').filter({ hasText: 'Nothing in the catalog changed' }).waitFor();
+
+    // The Counter shows the committed price: NR/IR 2208, cost 7.60, list 16.99 from this supplier.
+    await nav.getByRole('link', { name: 'Counter' }).click();
+    const box = s.page.getByLabel('Number, words or barcode');
+    await box.fill('NR/IR 2208');
+    await box.press('Enter');
+    const part = s.page.getByRole('complementary', { name: 'Part' });
+    const priceRow = part.getByRole('row').filter({ hasText: supplierName });
+    await priceRow.waitFor();
+    expect(await priceRow.textContent()).toMatch(/\$16\.99.*\$7\.60/);
+    await priceRow.scrollIntoViewIfNeeded();
+    await s.shot('price-lists-counter-new-price');
+
+    // The Suppliers page now dates the supplier's last price list.
+    await nav.getByRole('link', { name: 'Suppliers' }).click();
+    const supplierRow = s.page.getByRole('row').filter({ has: s.page.getByRole('cell', { name: supplierName, exact: true }) });
+    await supplierRow.filter({ hasNotText: 'none yet' }).waitFor();
+    await s.shot('price-lists-suppliers');
+  });
+});
