@@ -25,7 +25,6 @@ export SESSION_SECRET="${SESSION_SECRET:-$(ensure_session_secret)}"
 export TSX_TSCONFIG_PATH="$ROOT/tsconfig.json"
 
 log "migrating and seeding the demo data"
-npx tsx server/db/migrate.ts
 npx tsx seed/run.ts
 
 # Rebuild the client only when its inputs changed since the last build.

@@ -47,7 +47,14 @@ async function withInterchangeChecks(ds: DataSource, hits: SearchHit[], settings
       const originalPartId = h.matchedBy === 'interchange' ? originals.get(`${h.partId}|${h.matchedNumber}`) : undefined;
       if (!originalPartId || !h.matchedNumber) return h;
       const check = await interchangeVerdict(ds, { foreignNumberNorm: h.matchedNumber, originalPartId, partId: h.partId }, settings);
-      return { ...h, check: check && { verdict: check.verdict, engine: check.engine, concerns: check.concerns.map((c) => ({ id: c.id, verdict: c.verdict, reason: c.reason })) } };
+      return {
+        ...h,
+        check: check && {
+          verdict: check.verdict,
+          engine: check.engine,
+          concerns: check.concerns.map((c) => ({ id: c.id, verdict: c.verdict, reason: c.reason })),
+        },
+      };
     }),
   );
 }
@@ -59,7 +66,12 @@ function facetsFor(query: SearchQuery, numberLike: boolean): string[] {
   return numberLike ? [] : ['kind', 'brand'];
 }
 
-export async function searchParts(index: PartSearchIndex, query: SearchQuery, ds: DataSource, settings: CompatSettings): Promise<SearchResponse> {
+export async function searchParts(
+  index: PartSearchIndex,
+  query: SearchQuery,
+  ds: DataSource,
+  settings: CompatSettings,
+): Promise<SearchResponse> {
   const raw = query.q.trim();
   const numberLike = looksLikePartNumber(raw);
   const filtered = query.kind !== undefined || FACET_FIELDS.some((f) => query[f] !== undefined);

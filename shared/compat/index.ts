@@ -11,3 +11,4 @@ export * from './coil-checks';
 export * from './plug-checks';
 export * from './bench-test';
 export * from './rank';
+export * from './check-labels';

@@ -17,7 +17,10 @@ async function main(): Promise<void> {
   const deps = await buildDeps(env);
   await seedAll(deps.dataSource);
   const scale = await seedScale(env.DATABASE_URL);
-  if (scale.parts) console.error(`  scale data generated: ${scale.parts} parts, ${scale.interchange} interchange rows in ${(scale.ms / 1000).toFixed(1)} s`);
+  if (scale.parts)
+    console.error(
+      `  scale data generated: ${scale.parts} parts, ${scale.interchange} interchange rows in ${(scale.ms / 1000).toFixed(1)} s`,
+    );
   const t0 = Date.now();
   const indexed = await deps.search.rebuild(deps.dataSource);
   const server = createApp(deps).listen(0, '127.0.0.1', () => {

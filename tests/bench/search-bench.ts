@@ -59,7 +59,11 @@ async function sqlLookup(url: string, numbers: string[]): Promise<LatencySummary
 /** Starts tests/bench/bench-server.ts in a child process and waits for its port. */
 async function startServer(): Promise<{ base: string; indexed: number; indexMs: number; stop(): void }> {
   // Its own process group, so stopping it stops the node process under npx too.
-  const child = spawn('npx', ['tsx', 'tests/bench/bench-server.ts'], { stdio: ['ignore', 'pipe', 'inherit'], env: process.env, detached: true });
+  const child = spawn('npx', ['tsx', 'tests/bench/bench-server.ts'], {
+    stdio: ['ignore', 'pipe', 'inherit'],
+    env: process.env,
+    detached: true,
+  });
   const line = await new Promise<string>((resolve, reject) => {
     let buf = '';
     child.stdout.on('data', (d: Buffer) => {
@@ -70,7 +74,12 @@ async function startServer(): Promise<{ base: string; indexed: number; indexMs: 
     child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
   });
   const [, port, indexed, ms] = line.trim().split(' ');
-  return { base: `http://127.0.0.1:${port}`, indexed: Number(indexed), indexMs: Number(ms), stop: () => process.kill(-child.pid!, 'SIGTERM') };
+  return {
+    base: `http://127.0.0.1:${port}`,
+    indexed: Number(indexed),
+    indexMs: Number(ms),
+    stop: () => process.kill(-child.pid!, 'SIGTERM'),
+  };
 }
 
 export async function runSearchBench(): Promise<void> {

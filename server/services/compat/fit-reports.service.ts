@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
-import type { CompatSettings } from '../../../shared/compat';
+import { checkLabel, type CompatSettings } from '../../../shared/compat';
 import type { User } from '../../../shared/schemas/auth';
 import { CAUTIONS, type CompatResult, type FitReport, type FitReportBody } from '../../../shared/schemas/compat';
 import { AppError } from '../../errors';
@@ -123,9 +123,9 @@ export class FitReportService {
 
   async email(user: User, id: string, to: string, mailer: Mailer): Promise<void> {
     const report = await this.get(user, id);
-    const rows = report.result.checks.map((c) => `  ${c.verdict.toUpperCase().padEnd(6)} ${c.id}: ${c.reason}`).join('\n');
+    const rows = report.result.checks.map((c) => `  ${c.verdict.toUpperCase().padEnd(6)} ${checkLabel(c.id)}: ${c.reason}`).join('\n');
     const htmlRows = report.result.checks
-      .map((c) => `<tr><td><b>${escapeHtml(c.verdict)}</b></td><td>${escapeHtml(c.id)}</td><td>${escapeHtml(c.reason)}</td></tr>`)
+      .map((c) => `<tr><td><b>${escapeHtml(c.verdict)}</b></td><td>${escapeHtml(checkLabel(c.id))}</td><td>${escapeHtml(c.reason)}</td></tr>`)
       .join('');
     await mailer.send({
       to,

@@ -110,7 +110,9 @@ interface ListForCommit {
 }
 
 async function count(m: EntityManager, sql: string, params: unknown[]): Promise<number> {
+  const t0 = performance.now();
   const rows = (await m.query(sql, params)) as { n: number }[];
+  console.log(sql.slice(0, 60).replace(/\s+/g, ' '), Math.round(performance.now() - t0));
   return rows[0]?.n ?? 0;
 }
 

@@ -60,12 +60,12 @@ const DUPLICATES_SQL = `
 UPDATE price_list_row r SET change = 'rejected', reject_field = 'partNumber',
   reject_message = format('the same part (%s) is on lines %s; all of them are rejected', r.part_number, array_to_string(d.lines, ', '))
 FROM (
-  SELECT brand_id, part_number_norm, array_agg(line ORDER BY line) AS lines
+  SELECT line, count(*) OVER w AS n, array_agg(line) OVER w AS lines
     FROM price_list_row
    WHERE price_list_id = $1 AND NOT retracted AND change <> 'rejected'
-   GROUP BY brand_id, part_number_norm HAVING count(*) > 1
+  WINDOW w AS (PARTITION BY brand_id, part_number_norm ORDER BY line ROWS BETWEEN UNBOUNDED PRECEDING AND UNBOUNDED FOLLOWING)
 ) d
-WHERE r.price_list_id = $1 AND NOT r.retracted AND r.change <> 'rejected' AND r.brand_id = d.brand_id AND r.part_number_norm = d.part_number_norm`;
+WHERE d.n > 1 AND r.price_list_id = $1 AND r.line = d.line`;
 
 const CATALOG_ERRORS_SQL = `
 INSERT INTO price_list_row_error (price_list_id, line, "column", field, message, source)
@@ -167,8 +167,12 @@ export async function diffStagedList(
 ): Promise<DiffResult> {
   const { listId } = opts;
   await client.query(`DELETE FROM price_list_row_error WHERE price_list_id = $1 AND source = 'catalog'`, [listId]);
+  // Rows COPY just wrote have no statistics yet, so the planner takes the list for a few rows and
+  // may nest loops over it; hash joins suit every size of list here, from 40 rows to a million.
+  await client.query(`SET LOCAL enable_nestloop = off`);
   console.time('CLASSIFY_SQL'); await client.query(CLASSIFY_SQL, [listId, opts.supplierId, opts.flagThresholdPct]); console.timeEnd('CLASSIFY_SQL');
   console.time('DUPLICATES_SQL'); await client.query(DUPLICATES_SQL, [listId]); console.timeEnd('DUPLICATES_SQL');
+  await client.query(`SET LOCAL enable_nestloop = on`);
   console.time('CATALOG_ERRORS_SQL'); await client.query(CATALOG_ERRORS_SQL, [listId, JSON.stringify(opts.headers)]); console.timeEnd('CATALOG_ERRORS_SQL');
   console.time('SUPERSESSION_SQL'); await client.query(SUPERSESSION_SQL, [listId]); console.timeEnd('SUPERSESSION_SQL');
   console.time('LOOPS_SQL'); await client.query(LOOPS_SQL, [listId]); console.timeEnd('LOOPS_SQL');

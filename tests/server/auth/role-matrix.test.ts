@@ -1,5 +1,5 @@
 import type { Express, Router } from 'express';
-import request from 'supertest';
+import type request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ROLES, type Role } from '../../../shared/roles';
 import { ROUTE_ACCESS, type Access, type RouteKey } from '../../../server/routes/route-access';
