@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import { normalizePartNumber } from '../shared/part-number';
+import { writeCoilSpec, writePlugSpec } from '../server/services/catalog/catalog-edit.service';
 import { brands, engines, fitments, interchange, parts, stock, supersessions, supplierPrices, suppliers, vehicles } from './data';
 
 export interface CatalogCounts {
@@ -79,52 +80,9 @@ export async function seedCatalog(m: EntityManager): Promise<CatalogCounts> {
     )) as { id: string }[];
     const id = rows[0]?.id;
     if (!id) continue;
-    if (p.kind === 'coil') {
-      const s = p.spec;
-      await m.query(
-        `INSERT INTO coil_spec (part_id, architecture, driver, outputs, connector_pins, connector_key, primary_ohm_min, primary_ohm_max,
-           primary_inductance_mh, secondary_kohm_min, secondary_kohm_max, turns_ratio, available_kv, peak_current_a)
-         VALUES ($1,$2,$3,$4,$5,$6,$7,$8,$9,$10,$11,$12,$13,$14)`,
-        [
-          id,
-          s.architecture,
-          s.driver,
-          s.outputs,
-          s.connectorPins,
-          s.connectorKey,
-          s.primaryOhmMin,
-          s.primaryOhmMax,
-          s.primaryInductanceMh,
-          s.secondaryKohmMin ?? null,
-          s.secondaryKohmMax ?? null,
-          s.turnsRatio,
-          s.availableKv ?? null,
-          s.peakCurrentA,
-        ],
-      );
-    } else {
-      const s = p.spec;
-      await m.query(
-        `INSERT INTO plug_spec (part_id, thread_mm, thread_pitch_mm, reach_mm, seat, hex_mm, heat_code, gap_mm, regappable, resistor,
-           resistor_kohm, projected_tip, electrode)
-         VALUES ($1,$2,$3,$4,$5,$6,$7,$8,$9,$10,$11,$12,$13)`,
-        [
-          id,
-          s.threadMm,
-          s.threadPitchMm,
-          s.reachMm,
-          s.seat,
-          s.hexMm,
-          s.heatCode,
-          s.gapMm,
-          s.regappable,
-          s.resistor,
-          s.resistorKohm ?? null,
-          s.projectedTip,
-          s.electrode,
-        ],
-      );
-    }
+    // The same writers as the catalog's edit service: one definition of how a spec is stored.
+    if (p.kind === 'coil') await writeCoilSpec(m, id, p.spec);
+    else await writePlugSpec(m, id, p.spec);
   }
   const partIds = new Map<string, string>(
     ((await m.query(`SELECT id, part_number_norm FROM part`)) as { id: string; part_number_norm: string }[]).map((r) => [
