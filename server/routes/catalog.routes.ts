@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { z } from 'zod';
 import {
   createBrandBodySchema,
   createInterchangeBodySchema,
@@ -17,6 +18,8 @@ import { listEngines, listMakes, listModels, listYears } from '../services/catal
 import { searchParts } from '../services/search.service';
 import { getSettings } from '../services/settings.service';
 import { mount } from './mount';
+
+const partQuerySchema = z.object({ engineId: z.string().uuid().optional() });
 
 export function catalogRoutes(deps: AppDeps): Router {
   const r = Router();
@@ -53,7 +56,8 @@ export function catalogRoutes(deps: AppDeps): Router {
 
   mount(r, 'GET /api/parts/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    res.json(await getPartDetail(ds, id, currentUser(req).role, (await getSettings(ds)).compat));
+    const { engineId } = parseQuery(partQuerySchema, req);
+    res.json(await getPartDetail(ds, id, currentUser(req).role, (await getSettings(ds)).compat, engineId));
   });
 
   mount(r, 'GET /api/brands', async (_req, res) => {

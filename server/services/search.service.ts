@@ -30,7 +30,7 @@ function toHit(doc: PartDocument, q: string): SearchHit {
  * A number is searched in its normalised form first; free text when that finds nothing.
  */
 /** Interchange hits carry the verdict of the claim, so a wrong row shows as no-go at the counter. */
-async function withInterchangeChecks(ds: DataSource, hits: SearchHit[], settings: CompatSettings): Promise<SearchHit[]> {
+async function withInterchangeChecks(ds: DataSource, hits: SearchHit[], settings: CompatSettings, engineId?: string): Promise<SearchHit[]> {
   const claims = hits.filter((h) => h.matchedBy === 'interchange' && h.matchedNumber);
   if (!claims.length) return hits;
   // One query for every claim's foreign part (where the catalog holds its spec).
@@ -46,7 +46,12 @@ async function withInterchangeChecks(ds: DataSource, hits: SearchHit[], settings
     hits.map(async (h) => {
       const originalPartId = h.matchedBy === 'interchange' ? originals.get(`${h.partId}|${h.matchedNumber}`) : undefined;
       if (!originalPartId || !h.matchedNumber) return h;
-      const check = await interchangeVerdict(ds, { foreignNumberNorm: h.matchedNumber, originalPartId, partId: h.partId }, settings);
+      const check = await interchangeVerdict(
+        ds,
+        { foreignNumberNorm: h.matchedNumber, originalPartId, partId: h.partId },
+        settings,
+        engineId,
+      );
       return {
         ...h,
         check: check && {
@@ -77,7 +82,7 @@ export async function searchParts(
   const filtered = query.kind !== undefined || FACET_FIELDS.some((f) => query[f] !== undefined);
   if (numberLike && !filtered && query.offset === 0) {
     const exact = await exactNumberHits(ds, normalizePartNumber(raw), query.limit);
-    if (exact.length) return { hits: await withInterchangeChecks(ds, exact, settings), total: exact.length, facets: {} };
+    if (exact.length) return { hits: await withInterchangeChecks(ds, exact, settings, query.engineId), total: exact.length, facets: {} };
   }
   const base = { filter: buildFilters(query), facets: facetsFor(query, numberLike), limit: query.limit, offset: query.offset };
   let res = await index.index.search(numberLike ? normalizePartNumber(raw) : raw, base);
@@ -87,6 +92,7 @@ export async function searchParts(
       ds,
       res.hits.map((d) => toHit(d, raw)),
       settings,
+      query.engineId,
     ),
     total: res.estimatedTotalHits ?? res.hits.length,
     facets: res.facetDistribution ?? {},

@@ -32,6 +32,8 @@ export const searchQuerySchema = searchFacetQuerySchema.extend({
   kind: z.enum(PART_KINDS).optional(),
   limit: z.coerce.number().int().min(1).max(SEARCH_LIMIT_MAX).default(20),
   offset: z.coerce.number().int().min(0).max(10_000).default(0),
+  /** The vehicle's engine the clerk picked: interchange claims are judged on it. */
+  engineId: z.string().uuid().optional(),
 });
 export type SearchQuery = z.infer<typeof searchQuerySchema>;
 

@@ -39,7 +39,7 @@ async function supersessionOf(ds: DataSource, id: string) {
   };
 }
 
-export async function getPartDetail(ds: DataSource, id: string, role: Role, settings: CompatSettings) {
+export async function getPartDetail(ds: DataSource, id: string, role: Role, settings: CompatSettings, engineId?: string) {
   const row = (await loadPartRows(ds, [id])).get(id);
   if (!row) throw AppError.notFound('Part');
   const spec = (await loadSpecs(ds, [id])).get(id) ?? {};
@@ -68,6 +68,7 @@ export async function getPartDetail(ds: DataSource, id: string, role: Role, sett
           ds,
           { foreignNumberNorm: normalizePartNumber(i.number), originalPartId: i.original_part_id, partId: id },
           settings,
+          engineId,
         ),
       })),
     ),

@@ -131,6 +131,13 @@ describe('POST /api/compat/coil and /plug', () => {
     const search = (await tech.agent.get('/api/search').query({ q: 'SPF 52.135' }).expect(200)).body as SearchResponse;
     const verdicts = Object.fromEntries(search.hits.map((h) => [h.partNumber, h.check?.verdict]));
     expect(verdicts).toEqual({ 'QW-SP 1435': 'go', 'QW-SP 1406': 'no-go' });
+    // With the clerk's engine picked, the claim is judged on that engine.
+    const km13 = await engineIdOf(t.deps.dataSource, 'KM13');
+    const onKm13 = await tech.agent.get(`/api/parts/${ids['QW-SP 1406']}`).query({ engineId: km13 }).expect(200);
+    const judged = (onKm13.body.interchange as { number: string; check: { verdict: string; engine: string } | null }[]).find(
+      (i) => i.number === 'SPF 52.135',
+    );
+    expect(judged?.check).toMatchObject({ verdict: 'no-go', engine: expect.stringContaining('KM13') });
     // And directly: the foreign plug's own spec against ours.
     const direct = await post('/api/compat/plug', {
       original: { partId: ids['SPF 52.135'] },

@@ -43,7 +43,11 @@ export function CounterPage() {
   const table = useRef<ResultsTableHandle>(null);
   const searchInput = useRef<HTMLInputElement>(null);
 
-  const search = useMemo<PartSearch>(() => ({ q: settledText, kind, filters, limit: RESULT_LIMIT }), [settledText, kind, filters]);
+  const engineId = vehicle.engine?.id ?? null;
+  const search = useMemo<PartSearch>(
+    () => ({ q: settledText, kind, filters, limit: RESULT_LIMIT, engineId }),
+    [settledText, kind, filters, engineId],
+  );
   const results = useSearchParts(search);
   // Facet counts from the same words and kind without the spec filters, so no choice disappears.
   const facetSearch = useMemo<PartSearch>(

@@ -47,10 +47,13 @@ const partResponseSchema = z.object({
 });
 export type PartResponse = z.infer<typeof partResponseSchema>;
 
-export const getPart = (id: string): Promise<PartResponse> =>
-  api('GET', `/api/parts/${encodeURIComponent(id)}`, { schema: partResponseSchema });
+/** With an engine, each interchange claim is judged on that engine rather than the one the catalog infers. */
+export const getPart = (id: string, engineId: string | null = null): Promise<PartResponse> =>
+  api('GET', `/api/parts/${encodeURIComponent(id)}${engineId ? `?engineId=${encodeURIComponent(engineId)}` : ''}`, {
+    schema: partResponseSchema,
+  });
 
-export const partQueryOptions = (id: string | null) =>
-  queryOptions({ queryKey: catalogKeys.part(id ?? ''), queryFn: id === null ? skipToken : () => getPart(id) });
+export const partQueryOptions = (id: string | null, engineId: string | null = null) =>
+  queryOptions({ queryKey: catalogKeys.part(id ?? '', engineId), queryFn: id === null ? skipToken : () => getPart(id, engineId) });
 
-export const usePart = (id: string | null) => useQuery(partQueryOptions(id));
+export const usePart = (id: string | null, engineId: string | null = null) => useQuery(partQueryOptions(id, engineId));

@@ -8,5 +8,5 @@ export const catalogKeys = {
   engine: (id: string) => ['catalog', 'engine', id] as const,
   alternates: (engineId: string, kind: PartKind, includeNoGo: boolean) =>
     ['catalog', 'engine', engineId, 'alternates', kind, includeNoGo ? 'all' : 'fitting'] as const,
-  part: (id: string) => ['catalog', 'part', id] as const,
+  part: (id: string, engineId: string | null = null) => ['catalog', 'part', id, engineId ?? 'no-engine'] as const,
 };

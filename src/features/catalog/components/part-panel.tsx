@@ -36,7 +36,7 @@ export function PartPanel({
   onOpenPart: (id: string) => void;
   onClose: () => void;
 }) {
-  const detail = usePart(partId);
+  const detail = usePart(partId, engineId);
   const close = (
     <button type="button" onClick={onClose} className="rounded px-2 py-0.5 text-sm text-ink-soft hover:bg-paper-sunk">
       Close

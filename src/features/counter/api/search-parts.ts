@@ -14,11 +14,14 @@ export interface PartSearch {
   kind: PartKind | null;
   filters: SpecFilters;
   limit: number;
+  /** The picked vehicle's engine: interchange claims are judged on it. */
+  engineId?: string | null;
 }
 
 export function searchParams(search: PartSearch): URLSearchParams {
   const params = new URLSearchParams({ q: search.q.trim(), limit: String(search.limit) });
   if (search.kind) params.set('kind', search.kind);
+  if (search.engineId) params.set('engineId', search.engineId);
   for (const field of FACET_FIELDS) {
     const value = search.filters[field]?.trim();
     if (value) params.set(field, value);
