@@ -11,8 +11,8 @@ const ADMIN = ['admin'] as const;
 const BUYERS = ['buyer', 'admin'] as const;
 const COUNTER = ['clerk', 'technician', 'buyer', 'admin'] as const;
 const COMPARE = ['clerk', 'technician', 'buyer', 'admin'] as const;
-// Bench testing is shop work; the store's staff may run it for a customer's coil too.
-const BENCH = ['technician', 'clerk', 'buyer', 'admin'] as const;
+// Bench testing is the shop technician's job (product.md, Roles); an admin may do everything.
+const BENCH = ['technician', 'admin'] as const;
 
 export const ROUTE_ACCESS = {
   'GET /api/health': 'public',

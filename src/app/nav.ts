@@ -12,7 +12,7 @@ const ALL: readonly Role[] = ['clerk', 'technician', 'buyer', 'admin'];
 export const NAV_ITEMS: NavItem[] = [
   { to: '/counter', label: 'Counter', roles: ALL },
   { to: '/compare', label: 'Compare', roles: ALL },
-  { to: '/bench', label: 'Bench test', roles: ['technician', 'clerk', 'buyer', 'admin'] },
+  { to: '/bench', label: 'Bench test', roles: ['technician', 'admin'] },
   { to: '/fit-reports', label: 'Fit reports', roles: ALL },
   { to: '/price-lists', label: 'Price lists', roles: ['buyer', 'admin'] },
   { to: '/suppliers', label: 'Suppliers', roles: ['buyer', 'admin'] },

@@ -8,9 +8,11 @@ const ORDER = { go: 0, review: 1, 'no-go': 2 } as const;
 describe('alternates and bench test', () => {
   let t: TestApp;
   let clerk: { agent: Agent; token: string };
+  let tech: { agent: Agent; token: string };
   beforeAll(async () => {
     t = await createTestApp();
     clerk = await signIn(t.app, (await makeUser(t.deps.dataSource, 'clerk')).email, TEST_PASSWORD);
+    tech = await signIn(t.app, (await makeUser(t.deps.dataSource, 'technician')).email, TEST_PASSWORD);
   });
   afterAll(() => t.close());
 
@@ -40,8 +42,7 @@ describe('alternates and bench test', () => {
     const mid = (primaryOhmMin + primaryOhmMax) / 2;
     // A hot coil reads high: mid-window at 20 °C reads mid × (1 + α·40) at 60 °C.
     const hot = mid * (1 + 0.00393 * 40);
-    const post = (measured: unknown) =>
-      clerk.agent.post('/api/bench/coil').set('x-csrf-token', clerk.token).send({ partId: coil, measured });
+    const post = (measured: unknown) => tech.agent.post('/api/bench/coil').set('x-csrf-token', tech.token).send({ partId: coil, measured });
     const inSpec = await post({ primaryOhm: hot, temperatureC: 60 });
     expect(inSpec.status, JSON.stringify(inSpec.body)).toBe(200);
     expect(inSpec.body.verdict).toBe('in-spec');
@@ -49,6 +50,12 @@ describe('alternates and bench test', () => {
     expect((await post({ primaryOhm: primaryOhmMax * 1.5, temperatureC: 20 })).body.verdict).toBe('out-of-spec');
     expect((await post({ primaryOhm: primaryOhmMin * 0.05, temperatureC: 20 })).body.verdict).toBe('short');
     expect((await post({ primaryOhm: null, temperatureC: 20 })).body.verdict).toBe('open');
+    // Bench testing is the technician's: a clerk is refused.
+    await clerk.agent
+      .post('/api/bench/coil')
+      .set('x-csrf-token', clerk.token)
+      .send({ partId: coil, measured: { primaryOhm: hot, temperatureC: 60 } })
+      .expect(403);
     const bad = await post({ primaryOhm: 0.5, temperatureC: 900 });
     expect(bad.status).toBe(400);
     expect(JSON.stringify(bad.body.error.details)).toContain('temperatureC');
