@@ -3,8 +3,7 @@
  * Meilisearch computes them: each document counts once per distinct value, strings are grouped
  * case-insensitively, stats cover numeric values only.
  */
-import { factsOf, type DocumentRecord } from './document-record';
-import type { FieldFacts } from './field-paths';
+import { MANY_VALUES, type FieldStore } from './field-store';
 import { isFilterableAttribute, type ResolvedSettings } from './index-settings';
 import { badRequest } from './meili-error';
 
@@ -57,61 +56,63 @@ function alphaOrder(a: ValueCount, b: ValueCount): number {
   return left < right ? -1 : left > right ? 1 : 0;
 }
 
-/** Counts of one facet: strings by folded value (first spelling kept), numbers by value. */
-class FacetCounter {
-  readonly strings = new Map<string, ValueCount>();
-  readonly numbers = new Map<number, number>();
-  min = Number.POSITIVE_INFINITY;
-  max = Number.NEGATIVE_INFINITY;
-  private readonly seen = new Set<string | number>();
-
-  add(facts: FieldFacts): void {
-    for (const number of facts.numbers) {
-      if (number < this.min) this.min = number;
-      if (number > this.max) this.max = number;
-    }
-    const { strings, jsonNumbers } = facts;
-    // Most fields hold one value; only several values need de-duplicating within the document.
-    const single = strings.length + jsonNumbers.length === 1;
-    if (!single) this.seen.clear();
-    strings.forEach((folded, i) => {
-      if (!single) {
-        if (this.seen.has(folded)) return;
-        this.seen.add(folded);
-      }
-      const entry = this.strings.get(folded);
-      if (entry) entry.count++;
-      else this.strings.set(folded, { label: facts.displayStrings[i] ?? folded, count: 1, number: null });
-    });
-    for (const number of jsonNumbers) {
-      if (!single) {
-        if (this.seen.has(number)) continue;
-        this.seen.add(number);
-      }
-      this.numbers.set(number, (this.numbers.get(number) ?? 0) + 1);
-    }
-  }
-
-  values(): ValueCount[] {
-    const values = [...this.strings.values()];
-    for (const [number, count] of this.numbers) values.push({ label: String(number), count, number });
-    return values;
-  }
-}
-
-export function computeFacets(records: readonly DocumentRecord[], names: readonly string[], settings: ResolvedSettings): FacetResult {
+/**
+ * Counts every facet over the documents `seqs[0..count)`, by walking the field's column: one
+ * array read per document and facet. A group's label is the spelling of its first document.
+ */
+export function computeFacets(
+  store: FieldStore,
+  seqs: Int32Array,
+  count: number,
+  names: readonly string[],
+  settings: ResolvedSettings,
+): FacetResult {
   const facetDistribution: Record<string, Record<string, number>> = {};
   const facetStats: Record<string, FacetStats> = {};
   for (const name of names) {
-    const counter = new FacetCounter();
-    for (const record of records) counter.add(factsOf(record, name));
+    const column = store.column(name);
+    const groupCount = column.groupCount;
+    const counts = new Int32Array(groupCount);
+    const firstCode = new Int32Array(groupCount);
+    const { single, many, codeGroup } = column;
+    for (let i = 0; i < count; i++) {
+      const seq = seqs[i] as number;
+      const code = single[seq] as number;
+      if (code >= 0) {
+        const group = codeGroup[code] as number;
+        if ((counts[group] as number) === 0) firstCode[group] = code;
+        counts[group] = (counts[group] as number) + 1;
+      } else if (code === MANY_VALUES) {
+        const codes = many[seq] as Int32Array;
+        for (let k = 0; k < codes.length; k++) {
+          const each = codes[k] as number;
+          const group = codeGroup[each] as number;
+          if ((counts[group] as number) === 0) firstCode[group] = each;
+          counts[group] = (counts[group] as number) + 1;
+        }
+      }
+    }
+    const values: ValueCount[] = [];
+    let min = Number.POSITIVE_INFINITY;
+    let max = Number.NEGATIVE_INFINITY;
+    for (let group = 0; group < groupCount; group++) {
+      const groupHits = counts[group] as number;
+      if (groupHits === 0) continue;
+      const number = column.groupNumber[group] as number;
+      if (!Number.isNaN(number)) {
+        if (number < min) min = number;
+        if (number > max) max = number;
+      }
+      const isNumber = column.groupIsNumber[group] as boolean;
+      values.push({ label: column.codeLabel[firstCode[group] as number] as string, count: groupHits, number: isNumber ? number : null });
+    }
     const order = settings.sortFacetValuesBy[name] ?? settings.sortFacetValuesBy['*'] ?? 'alpha';
-    const values = counter.values().sort(order === 'count' ? (a, b) => b.count - a.count || alphaOrder(a, b) : alphaOrder);
+    values.sort(order === 'count' ? (a, b) => b.count - a.count || alphaOrder(a, b) : alphaOrder);
     const distribution: Record<string, number> = {};
     for (const value of values.slice(0, settings.maxValuesPerFacet))
       distribution[value.label] = (distribution[value.label] ?? 0) + value.count;
     facetDistribution[name] = distribution;
-    if (counter.min <= counter.max) facetStats[name] = { min: counter.min, max: counter.max };
+    if (min <= max) facetStats[name] = { min, max };
   }
   return { facetDistribution, facetStats };
 }

@@ -47,7 +47,7 @@ export interface FieldFacts {
   displayStrings: string[];
 }
 
-const NUMERIC_STRING = /^\s*[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?\s*$/;
+export const NUMERIC_STRING = /^\s*[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?\s*$/;
 
 export function fieldFacts(doc: JsonObject, path: string): FieldFacts {
   const values = valuesAtPath(doc, path);

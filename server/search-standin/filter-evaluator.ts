@@ -12,12 +12,12 @@ import { foldFacetValue } from './text-tokens';
 
 export type DocumentPredicate = (record: DocumentRecord) => boolean;
 
-interface PreparedValue {
+export interface PreparedValue {
   folded: string;
   number: number | null;
 }
 
-function prepare(value: string): PreparedValue {
+export function prepare(value: string): PreparedValue {
   const trimmed = value.trim();
   const number = trimmed === '' ? Number.NaN : Number(trimmed);
   return { folded: foldFacetValue(value), number: Number.isFinite(number) ? number : null };
@@ -58,14 +58,14 @@ function inRange(facts: FieldFacts, from: PreparedValue, to: PreparedValue): boo
   return facts.strings.some((text) => text >= from.folded && text <= to.folded);
 }
 
-const RANGE_OPERATORS = new Set(['>', '>=', '<', '<=']);
+export const RANGE_OPERATORS = new Set(['>', '>=', '<', '<=']);
 
-interface FilterContext {
+export interface FilterContext {
   source: string;
   rules: readonly FilterableRule[];
 }
 
-function checkAttribute(context: FilterContext, attribute: string, needsComparison: boolean): void {
+export function checkAttribute(context: FilterContext, attribute: string, needsComparison: boolean): void {
   const rule = context.rules.find((candidate) => candidate.patterns.some((pattern) => matchesAttributePattern(attribute, pattern)));
   if (!rule || !rule.equality) {
     const available = context.rules.flatMap((candidate) => candidate.patterns);

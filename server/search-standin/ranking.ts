@@ -171,3 +171,96 @@ export function selectBest<T>(items: readonly T[], count: number, compare: (a: T
   }
   return heap.sort(compare);
 }
+
+/**
+ * The fast path of text ranking, when no sort criteria or custom rules apply: the words, typo,
+ * attribute and exactness rules, in the index's order, packed into one integer per candidate
+ * (smaller is better), so candidates compare as (key, score desc, seq) without objects.
+ */
+export interface PackedRanking {
+  /** Bit offset of each rule's component, -1 when the rule is not listed. */
+  words: number;
+  typo: number;
+  attribute: number;
+  exactness: number;
+}
+
+/** Component widths: at most 10 query words, 2 typos each, 24 attribute ranks. */
+const PACKED_WIDTHS: Record<keyof PackedRanking, number> = { words: 4, typo: 5, attribute: 5, exactness: 4 };
+const WORDS_CEILING = 15;
+
+export function packedRanking(rankingRules: readonly string[], sort: readonly SortCriterion[]): PackedRanking | null {
+  if (sort.length > 0) return null;
+  if (rankingRules.some((rule) => /^(.+):(asc|desc)$/.test(rule))) return null;
+  const listed: Array<keyof PackedRanking> = [];
+  for (const rule of rankingRules) {
+    if ((rule === 'words' || rule === 'typo' || rule === 'attribute' || rule === 'exactness') && !listed.includes(rule)) listed.push(rule);
+  }
+  const plan: PackedRanking = { words: -1, typo: -1, attribute: -1, exactness: -1 };
+  let shift = 0;
+  for (let i = listed.length - 1; i >= 0; i--) {
+    const rule = listed[i] as keyof PackedRanking;
+    plan[rule] = shift;
+    shift += PACKED_WIDTHS[rule];
+  }
+  return plan;
+}
+
+export function packRank(plan: PackedRanking, level: number, typos: number, attributeRank: number, exactWords: number): number {
+  let key = 0;
+  if (plan.words >= 0) key |= (WORDS_CEILING - level) << plan.words;
+  if (plan.typo >= 0) key |= Math.min(typos, 31) << plan.typo;
+  if (plan.attribute >= 0) key |= Math.min(attributeRank, 31) << plan.attribute;
+  if (plan.exactness >= 0) key |= (WORDS_CEILING - exactWords) << plan.exactness;
+  return key;
+}
+
+/**
+ * Indices of the best `count` of `n` candidates, best first: packed key ascending, then score
+ * descending, then seq ascending — what buildComparator gives for the same rules. A bounded heap
+ * keeps it O(n log count), and most candidates are turned away by one comparison with its root.
+ */
+export function selectTopPacked(n: number, count: number, key: Int32Array, score: Float64Array, seq: Int32Array): number[] {
+  if (count <= 0 || n === 0) return [];
+  // a ranks after b
+  const worse = (a: number, b: number): boolean => {
+    const ka = key[a] as number;
+    const kb = key[b] as number;
+    if (ka !== kb) return ka > kb;
+    const sa = score[a] as number;
+    const sb = score[b] as number;
+    if (sa !== sb) return sa < sb;
+    return (seq[a] as number) > (seq[b] as number);
+  };
+  const heap: number[] = [];
+  for (let i = 0; i < n; i++) {
+    if (heap.length < count) {
+      heap.push(i);
+      let at = heap.length - 1;
+      while (at > 0) {
+        const parent = (at - 1) >> 1;
+        if (!worse(heap[at] as number, heap[parent] as number)) break;
+        const held = heap[at] as number;
+        heap[at] = heap[parent] as number;
+        heap[parent] = held;
+        at = parent;
+      }
+    } else if (worse(heap[0] as number, i)) {
+      heap[0] = i;
+      let at = 0;
+      for (;;) {
+        const left = 2 * at + 1;
+        const right = left + 1;
+        let top = at;
+        if (left < heap.length && worse(heap[left] as number, heap[top] as number)) top = left;
+        if (right < heap.length && worse(heap[right] as number, heap[top] as number)) top = right;
+        if (top === at) break;
+        const held = heap[at] as number;
+        heap[at] = heap[top] as number;
+        heap[top] = held;
+        at = top;
+      }
+    }
+  }
+  return heap.sort((a, b) => (worse(a, b) ? 1 : worse(b, a) ? -1 : 0));
+}

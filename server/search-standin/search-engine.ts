@@ -1,15 +1,31 @@
 /**
  * One search over one index: text matching (per query term, with Meilisearch's matching
  * strategies), filtering, facets, ranking and pagination, answered in Meilisearch's response shape.
+ *
+ * Filters are bitsets over document numbers (filter-bitsets.ts), facets are counted from field
+ * columns (field-store.ts), text candidates are kept in typed arrays, and without sort criteria
+ * the page is picked by a bounded heap over packed ranking keys: RankedCandidate objects are only
+ * made for the hits returned, unless sorting or distinct needs them for every candidate.
  */
+import { countBits, hasBit, listBits, type Bitset } from './bitset';
 import { factsOf, type DocumentRecord } from './document-record';
 import { matchesAttributePattern, pickAttributes, type JsonObject } from './field-paths';
 import { computeFacets, resolveFacetNames, type FacetResult } from './facets';
-import { compileFilter, type DocumentPredicate } from './filter-evaluator';
+import { compileBitsetFilter, type BitsetFilter } from './filter-bitsets';
 import { formatHit, type MatchedWords } from './highlight';
 import { isFilterableAttribute } from './index-settings';
 import { badRequest } from './meili-error';
-import { buildComparator, parseSortCriteria, selectBest, type CandidateComparator, type RankedCandidate } from './ranking';
+import {
+  buildComparator,
+  packedRanking,
+  packRank,
+  parseSortCriteria,
+  selectBest,
+  selectTopPacked,
+  type CandidateComparator,
+  type PackedRanking,
+  type RankedCandidate,
+} from './ranking';
 import { DEFAULT_SEARCH_LIMIT, type SearchRequest } from './search-request';
 import type { StandinIndex } from './standin-index';
 import type { TermMatches } from './text-index';
@@ -22,9 +38,16 @@ interface Window {
   end: number;
 }
 
-interface Candidates {
-  /** All matching documents, in no particular order. */
-  all: RankedCandidate[];
+/** Documents matching the query terms and the filter, in the order the first term met them. */
+interface TextCandidates {
+  count: number;
+  slots: Int32Array;
+  seqs: Int32Array;
+  level: Uint8Array;
+  typos: Uint8Array;
+  attributeRank: Uint8Array;
+  exactWords: Uint8Array;
+  score: Float64Array;
   /** What every term matched, for highlighting. */
   matchedWords: MatchedWords;
 }
@@ -35,7 +58,7 @@ function placeholderCandidate(record: DocumentRecord): RankedCandidate {
   return { record, level: 0, typos: 0, attributeRank: 0, exactWords: 0, score: 0 };
 }
 
-function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[], predicate: DocumentPredicate | null): Candidates {
+function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[], filterBits: Bitset | null): TextCandidates {
   const settings = index.resolved;
   const text = index.text();
   const budgetRules = {
@@ -71,38 +94,88 @@ function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[]
   // Terms are dropped from the end ("last") or most frequent first ("frequency"); a document
   // ranks by how many terms it matches in that order, and must match at least the first.
   const order = terms.map((_, i) => i);
-  if (request.matchingStrategy === 'frequency') order.sort((a, b) => (matches[a]?.slots.length ?? 0) - (matches[b]?.slots.length ?? 0));
-  const ordered = order.map((i) => matches[i] as TermMatches);
+  if (request.matchingStrategy === 'frequency') order.sort((a, b) => (matches[a]?.count ?? 0) - (matches[b]?.count ?? 0));
   const required = request.matchingStrategy === 'all' ? terms.length : 1;
+  const driver = matches[order[0] as number] as TermMatches;
 
-  const all: RankedCandidate[] = [];
-  for (const slot of ordered[0]?.slots ?? []) {
-    const record = text.recordAt(slot);
-    if (!record || (predicate && !predicate(record))) continue;
-    let level = 0;
-    let typos = 0;
-    let attributeRank = Number.MAX_SAFE_INTEGER;
-    let exactWords = 0;
-    for (const match of ordered) {
-      const termTypos = match.typos[slot] as number;
-      if (termTypos < 0) break;
-      level++;
-      typos += termTypos;
-      attributeRank = Math.min(attributeRank, match.attributeRank[slot] as number);
-      exactWords += match.exact[slot] as number;
+  const capacity = driver.count;
+  const found: TextCandidates = {
+    count: 0,
+    slots: new Int32Array(capacity),
+    seqs: new Int32Array(capacity),
+    level: new Uint8Array(capacity),
+    typos: new Uint8Array(capacity),
+    attributeRank: new Uint8Array(capacity),
+    exactWords: new Uint8Array(capacity),
+    score: new Float64Array(capacity),
+    matchedWords: { words: new Set(), prefixes: [] },
+  };
+  // The other terms are joined through slot -> entry maps; the driver is walked directly.
+  const others = order.slice(1).map((i) => matches[i] as TermMatches);
+  text.withEntryMaps(others, (maps) => {
+    // For the score, every term counts, in query order; entry maps by query position.
+    const mapByTerm: Array<Int32Array | null> = matches.map(() => null);
+    order.slice(1).forEach((termIndex, k) => {
+      mapByTerm[termIndex] = maps[k] as Int32Array;
+    });
+    const driverIndex = order[0] as number;
+    for (let i = 0; i < driver.count; i++) {
+      const slot = driver.slots[i] as number;
+      const record = text.recordAt(slot);
+      if (!record || (filterBits && !hasBit(filterBits, record.seq))) continue;
+      let level = 1;
+      let typos = driver.typos[i] as number;
+      let attributeRank = driver.attributeRank[i] as number;
+      let exactWords = driver.exact[i] as number;
+      for (let k = 0; k < others.length; k++) {
+        const entry = (maps[k] as Int32Array)[slot] as number;
+        if (entry < 0) break;
+        const match = others[k] as TermMatches;
+        level++;
+        typos += match.typos[entry] as number;
+        const rank = match.attributeRank[entry] as number;
+        if (rank < attributeRank) attributeRank = rank;
+        exactWords += match.exact[entry] as number;
+      }
+      if (level < required) continue;
+      let score = 0;
+      for (let t = 0; t < matches.length; t++) {
+        if (t === driverIndex) {
+          score += driver.score[i] as number;
+          continue;
+        }
+        const entry = (mapByTerm[t] as Int32Array)[slot] as number;
+        if (entry >= 0) score += (matches[t] as TermMatches).score[entry] as number;
+      }
+      const n = found.count++;
+      found.slots[n] = slot;
+      found.seqs[n] = record.seq;
+      found.level[n] = level;
+      found.typos[n] = typos;
+      found.attributeRank[n] = attributeRank;
+      found.exactWords[n] = exactWords;
+      found.score[n] = score;
     }
-    if (level < required) continue;
-    let score = 0;
-    for (const match of matches) if ((match.typos[slot] as number) >= 0) score += match.score[slot] as number;
-    all.push({ record, level, typos, attributeRank, exactWords, score });
-  }
+  });
   const words = new Set<string>();
   const prefixes: string[] = [];
   for (const match of matches) {
     for (const word of match.words) words.add(word);
     if (match.prefix !== null) prefixes.push(match.prefix);
   }
-  return { all, matchedWords: { words, prefixes } };
+  found.matchedWords = { words, prefixes };
+  return found;
+}
+
+function candidateAt(index: StandinIndex, found: TextCandidates, i: number): RankedCandidate {
+  return {
+    record: index.text().recordAt(found.slots[i] as number) as DocumentRecord,
+    level: found.level[i] as number,
+    typos: found.typos[i] as number,
+    attributeRank: found.attributeRank[i] as number,
+    exactWords: found.exactWords[i] as number,
+    score: found.score[i] as number,
+  };
 }
 
 function distinctKey(record: DocumentRecord, attribute: string): string | null {
@@ -140,61 +213,89 @@ interface SearchPlan {
   index: StandinIndex;
   request: SearchRequest;
   terms: string[];
-  predicate: DocumentPredicate | null;
+  filter: BitsetFilter | null;
   facetNames: string[] | null;
   distinct: string | null;
   compare: CandidateComparator;
+  /** Set when ranking needs no sort keys: candidates then compare without objects. */
+  packed: PackedRanking | null;
   window: Window;
 }
 
+function facetsOver(index: StandinIndex, facetNames: string[] | null, seqs: Int32Array, count: number): FacetResult | null {
+  return facetNames ? computeFacets(index.fieldStore, seqs, count, facetNames, index.resolved) : null;
+}
+
 /**
- * A placeholder search walks the records in result order (insertion order, or a cached sorted
- * order) and stops once the page and the capped count are known, unless facets need them all.
+ * A placeholder search takes the filter's documents in result order (insertion order, or a cached
+ * sorted order) up to the page's end; the total is the filter's size.
  */
-function rankPlaceholder({ index, request, predicate, facetNames, compare, window }: SearchPlan): RankedPage {
+function rankPlaceholder({ index, request, filter, facetNames, compare, window }: SearchPlan): RankedPage {
   const settings = index.resolved;
-  const ordered: Iterable<DocumentRecord> =
-    request.sort.length === 0 && !settings.rankingRules.some((rule) => rule.includes(':'))
-      ? index.records.values()
-      : index.orderedRecords(JSON.stringify([settings.rankingRules, request.sort]), () =>
-          [...index.records.values()]
-            .map(placeholderCandidate)
-            .sort(compare)
-            .map((candidate) => candidate.record),
-        );
+  const store = index.fieldStore;
+  const bits = filter ? filter(store) : store.live;
+  const total = countBits(bits);
   const ranked: RankedCandidate[] = [];
-  const facetRecords: DocumentRecord[] = [];
-  let total = 0;
-  for (const record of ordered) {
-    if (predicate && !predicate(record)) continue;
-    if (total < window.end) ranked.push(placeholderCandidate(record));
-    total++;
-    if (facetNames) facetRecords.push(record);
-    else if (total >= settings.maxTotalHits) break;
+  if (request.sort.length === 0 && !settings.rankingRules.some((rule) => rule.includes(':'))) {
+    const page = new Int32Array(Math.min(window.end, total));
+    const n = listBits(bits, page);
+    for (let i = 0; i < n; i++) ranked.push(placeholderCandidate(index.bySeq.get(page[i] as number) as DocumentRecord));
+  } else if (window.end > 0) {
+    const ordered = index.orderedRecords(JSON.stringify([settings.rankingRules, request.sort]), () =>
+      [...index.records.values()]
+        .map(placeholderCandidate)
+        .sort(compare)
+        .map((candidate) => candidate.record),
+    );
+    for (const record of ordered) {
+      if (!hasBit(bits, record.seq)) continue;
+      ranked.push(placeholderCandidate(record));
+      if (ranked.length >= window.end) break;
+    }
   }
-  const facets = facetNames ? computeFacets(facetRecords, facetNames, settings) : null;
+  let facets: FacetResult | null = null;
+  if (facetNames) {
+    const seqs = new Int32Array(total);
+    facets = facetsOver(index, facetNames, seqs, listBits(bits, seqs));
+  }
   return { ranked, total, facets, matchedWords: null };
 }
 
 /** Every other search ranks all its candidates, keeping only the best up to the page's end. */
-function rankCandidates({ index, request, terms, predicate, facetNames, distinct, compare, window }: SearchPlan): RankedPage {
+function rankCandidates({ index, terms, request, filter, facetNames, distinct, compare, packed, window }: SearchPlan): RankedPage {
+  const store = index.fieldStore;
+  const bits = filter ? filter(store) : null;
   let all: RankedCandidate[];
   let matchedWords: MatchedWords | null = null;
+  let facets: FacetResult | null;
   if (terms.length === 0) {
+    const live = bits ?? store.live;
+    const seqs = new Int32Array(countBits(live));
+    const count = listBits(live, seqs);
     all = [];
-    for (const record of index.records.values()) if (!predicate || predicate(record)) all.push(placeholderCandidate(record));
+    for (let i = 0; i < count; i++) all.push(placeholderCandidate(index.bySeq.get(seqs[i] as number) as DocumentRecord));
+    facets = facetsOver(index, facetNames, seqs, count);
   } else {
-    const matched = matchTerms(index, request, terms, predicate);
-    all = matched.all;
-    matchedWords = matched.matchedWords;
+    const found = matchTerms(index, request, terms, bits);
+    matchedWords = found.matchedWords;
+    facets = facetsOver(index, facetNames, found.seqs, found.count);
+    if (packed && !distinct) {
+      const keys = new Int32Array(found.count);
+      for (let i = 0; i < found.count; i++) {
+        keys[i] = packRank(
+          packed,
+          found.level[i] as number,
+          found.typos[i] as number,
+          found.attributeRank[i] as number,
+          found.exactWords[i] as number,
+        );
+      }
+      const best = selectTopPacked(found.count, window.end, keys, found.score, found.seqs);
+      return { ranked: best.map((i) => candidateAt(index, found, i)), total: found.count, facets, matchedWords };
+    }
+    all = [];
+    for (let i = 0; i < found.count; i++) all.push(candidateAt(index, found, i));
   }
-  const facets = facetNames
-    ? computeFacets(
-        all.map((candidate) => candidate.record),
-        facetNames,
-        index.resolved,
-      )
-    : null;
   if (!distinct) return { ranked: selectBest(all, window.end, compare), total: all.length, facets, matchedWords };
   // Distinct keeps the best document per value, so everything has to be ranked first.
   const seen = new Set<string>();
@@ -213,7 +314,7 @@ export function runSearch(index: StandinIndex, request: SearchRequest): JsonObje
   const settings = index.resolved;
   const sortCriteria = parseSortCriteria(request.sort, settings.sortableAttributes, settings.rankingRules);
   const facetNames = request.facets ? resolveFacetNames(request.facets, settings, index.fields) : null;
-  const predicate = compileFilter(request.filter, settings.filterableRules);
+  const filter = compileBitsetFilter(request.filter, settings.filterableRules);
   if (request.distinct !== null && !isFilterableAttribute(request.distinct, settings)) {
     throw badRequest(
       'invalid_search_distinct',
@@ -234,10 +335,11 @@ export function runSearch(index: StandinIndex, request: SearchRequest): JsonObje
     index,
     request,
     terms,
-    predicate,
+    filter,
     facetNames,
     distinct,
     compare: buildComparator(settings.rankingRules, sortCriteria, terms.length > 0),
+    packed: packedRanking(settings.rankingRules, sortCriteria),
     window,
   };
   const { ranked, total, facets, matchedWords } = terms.length === 0 && !distinct ? rankPlaceholder(plan) : rankCandidates(plan);

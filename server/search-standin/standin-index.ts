@@ -8,6 +8,7 @@
 import type { DocumentRecord } from './document-record';
 import { documentIdOf, inferPrimaryKey } from './document-ids';
 import type { JsonObject } from './field-paths';
+import { FieldStore } from './field-store';
 import type { DocumentPredicate } from './filter-evaluator';
 import { applySettingsPatch, defaultSettings, resolveSettings, type ResolvedSettings } from './index-settings';
 import { MeiliError } from './meili-error';
@@ -42,6 +43,8 @@ export class StandinIndex {
   private nextSeq = 0;
   /** Placeholder-search orders (by sort criteria), valid until the next change. */
   private readonly orderCache = new Map<string, DocumentRecord[]>();
+  /** Field values by document for filters and facets, kept in step with every write. */
+  readonly fieldStore = new FieldStore(() => this.records.values());
 
   constructor(
     readonly uid: string,
@@ -166,6 +169,7 @@ export class StandinIndex {
         changed.push(record);
       }
     }
+    for (const record of changed) this.fieldStore.written(record);
     const searchableChanged = this.resolvedSettings.searchableAttributes === null && this.fieldOrder.length !== fieldsBefore;
     if (this.textIndex && !searchableChanged) this.textIndex.addAll(changed);
     else this.text();
@@ -199,6 +203,7 @@ export class StandinIndex {
       this.records.delete(id);
       this.bySeq.delete(record.seq);
       this.textIndex?.discard(record.seq);
+      this.fieldStore.deleted(record.seq);
       deleted++;
     }
     if (deleted > 0) {
@@ -219,6 +224,7 @@ export class StandinIndex {
     this.records.clear();
     this.bySeq.clear();
     this.textIndex = null;
+    this.fieldStore.clear();
     this.touch();
     return deleted;
   }

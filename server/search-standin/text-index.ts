@@ -15,14 +15,17 @@ import { tokenize } from './text-tokens';
 import { adjacentTranspositions, typosBetween } from './typo-distance';
 
 /**
- * How one query term matched the documents, by text-index slot: typed arrays sized to the slot
- * count, because a common word or a short prefix matches tens of thousands of documents and an
- * object per match was most of the search time.
+ * How one query term matched the documents: parallel typed arrays, one entry per matched slot in
+ * the order the lookups met them. A common word or a short prefix matches tens of thousands of
+ * documents, so there is no object per match; and the same term is looked up again and again
+ * (every query for "spark plug"), so results are cached until the next write.
  */
 export interface TermMatches {
+  /** How many slots matched; the arrays may be longer. */
+  count: number;
   /** Matched slots, each once. */
-  slots: number[];
-  /** Typos of the best match per slot, -1 where the term did not match. */
+  slots: Int32Array;
+  /** Typos of the best match per entry. */
   typos: Int8Array;
   exact: Uint8Array;
   /** Position of the best matching attribute in the searchable list (lower is better). */
@@ -49,6 +52,11 @@ interface Derivation {
   prefix: boolean;
   weight: number;
 }
+
+/** Cached term lookups, bounded by count and by matched entries (15 bytes each). */
+const MAX_CACHED_TERMS = 256;
+const MAX_CACHED_ENTRIES = 3_000_000;
+const INITIAL_MATCH_CAPACITY = 64;
 
 const BM25_K1 = 1.2;
 const BM25_B = 0.7;
@@ -82,6 +90,10 @@ export class TextIndex {
   private readonly typoDisabledMask: number;
   private totalLength = 0;
   private readonly isLive = (slot: number): boolean => this.recordBySlot[slot] !== undefined;
+  private readonly termCache = new Map<string, TermMatches>();
+  private cachedEntries = 0;
+  /** Slot -> entry index, -1 elsewhere: one while a term is collected, more while terms are joined. */
+  private readonly scratch: Int32Array[] = [];
 
   constructor(
     readonly fields: readonly string[],
@@ -109,6 +121,7 @@ export class TextIndex {
   }
 
   addAll(records: Iterable<DocumentRecord>): void {
+    this.forgetTerms();
     // Per document: word -> packed field mask and frequency, without an object per word.
     const perWord = new Map<string, number>();
     let bit = 0;
@@ -143,6 +156,7 @@ export class TextIndex {
   discard(seq: number): void {
     const slot = this.slotBySeq.get(seq);
     if (slot === undefined) return;
+    this.forgetTerms();
     this.slotBySeq.delete(seq);
     this.recordBySlot[slot] = undefined;
     this.totalLength -= this.lengthBySlot[slot] ?? 0;
@@ -152,20 +166,95 @@ export class TextIndex {
     return this.recordBySlot[slot];
   }
 
-  /** Every document matching one query term, with how it matched. */
+  /** Scores depend on the document count and lengths: any write drops every cached term. */
+  private forgetTerms(): void {
+    if (this.termCache.size === 0) return;
+    this.termCache.clear();
+    this.cachedEntries = 0;
+  }
+
+  /** Scratch slot maps, each all -1 and at least as long as the slot count. */
+  private scratchMaps(count: number): Int32Array[] {
+    const size = this.recordBySlot.length;
+    for (let i = 0; i < count; i++) {
+      const map = this.scratch[i];
+      if (!map || map.length < size) this.scratch[i] = new Int32Array(Math.max(size, 2 * (map?.length ?? 0))).fill(-1);
+    }
+    return this.scratch.slice(0, count);
+  }
+
+  /**
+   * Runs `join` with, for each of `matches`, a map from slot to its entry index (-1 where the term
+   * did not match), and clears the maps afterwards.
+   */
+  withEntryMaps<T>(matches: readonly TermMatches[], join: (maps: Int32Array[]) => T): T {
+    const maps = this.scratchMaps(matches.length);
+    matches.forEach((match, k) => {
+      const map = maps[k] as Int32Array;
+      for (let i = 0; i < match.count; i++) map[match.slots[i] as number] = i;
+    });
+    try {
+      return join(maps);
+    } finally {
+      matches.forEach((match, k) => {
+        const map = maps[k] as Int32Array;
+        for (let i = 0; i < match.count; i++) map[match.slots[i] as number] = -1;
+      });
+    }
+  }
+
+  /** Every document matching one query term, with how it matched; cached until the next write. */
   termHits(query: TermQuery): TermMatches {
+    const allowedMask = query.fields ? this.maskOf(query.fields) : -1;
+    const key = `${query.asPrefix ? 'p' : 'w'}${query.budget}:${allowedMask}:${query.term}`;
+    const cached = this.termCache.get(key);
+    if (cached) {
+      // Refresh its place so the oldest lookups are the ones dropped.
+      this.termCache.delete(key);
+      this.termCache.set(key, cached);
+      return cached;
+    }
+    const matches = this.lookUpTerm(query, allowedMask);
+    if (matches.count <= MAX_CACHED_ENTRIES) {
+      while (this.termCache.size >= MAX_CACHED_TERMS || this.cachedEntries + matches.count > MAX_CACHED_ENTRIES) {
+        const oldest = this.termCache.keys().next();
+        if (oldest.done) break;
+        this.cachedEntries -= (this.termCache.get(oldest.value) as TermMatches).count;
+        this.termCache.delete(oldest.value);
+      }
+      this.termCache.set(key, matches);
+      this.cachedEntries += matches.count;
+    }
+    return matches;
+  }
+
+  private lookUpTerm(query: TermQuery, allowedMask: number): TermMatches {
     const { term, asPrefix, budget } = query;
-    const slotCount = this.recordBySlot.length;
+    let capacity = INITIAL_MATCH_CAPACITY;
     const matches: TermMatches = {
-      slots: [],
-      typos: new Int8Array(slotCount).fill(-1),
-      exact: new Uint8Array(slotCount),
-      attributeRank: new Uint8Array(slotCount),
-      score: new Float64Array(slotCount),
+      count: 0,
+      slots: new Int32Array(capacity),
+      typos: new Int8Array(capacity),
+      exact: new Uint8Array(capacity),
+      attributeRank: new Uint8Array(capacity),
+      score: new Float64Array(capacity),
       words: new Set(),
       prefix: asPrefix ? term : null,
     };
-    const allowedMask = query.fields ? this.maskOf(query.fields) : -1;
+    const grow = (): void => {
+      capacity *= 2;
+      const grown = <A extends Int32Array | Int8Array | Uint8Array | Float64Array>(array: A, make: (size: number) => A): A => {
+        const bigger = make(capacity);
+        bigger.set(array);
+        return bigger;
+      };
+      matches.slots = grown(matches.slots, (size) => new Int32Array(size));
+      matches.typos = grown(matches.typos, (size) => new Int8Array(size));
+      matches.exact = grown(matches.exact, (size) => new Uint8Array(size));
+      matches.attributeRank = grown(matches.attributeRank, (size) => new Uint8Array(size));
+      matches.score = grown(matches.score, (size) => new Float64Array(size));
+    };
+    const entryOf = (this.scratchMaps(1)[0] as Int32Array);
     const documentCount = Math.max(1, this.slotBySeq.size);
     const averageLength = this.totalLength / documentCount || 1;
 
@@ -189,18 +278,21 @@ export class TextIndex {
         const lengthRatio = (this.lengthBySlot[slot] as number) / averageLength;
         const score = (derivation.weight * idf * frequency * (BM25_K1 + 1)) / (frequency + BM25_K1 * (1 - BM25_B + BM25_B * lengthRatio));
         const rank = bestFieldRank(mask);
-        const typos = matches.typos[slot] as number;
-        if (typos < 0) {
-          matches.slots.push(slot);
-          matches.typos[slot] = derivation.typos;
-          matches.exact[slot] = derivation.exact ? 1 : 0;
-          matches.attributeRank[slot] = rank;
-          matches.score[slot] = score;
+        const entry = entryOf[slot] as number;
+        if (entry < 0) {
+          if (matches.count === capacity) grow();
+          const added = matches.count++;
+          entryOf[slot] = added;
+          matches.slots[added] = slot;
+          matches.typos[added] = derivation.typos;
+          matches.exact[added] = derivation.exact ? 1 : 0;
+          matches.attributeRank[added] = rank;
+          matches.score[added] = score;
         } else {
-          if (derivation.typos < typos) matches.typos[slot] = derivation.typos;
-          if (derivation.exact) matches.exact[slot] = 1;
-          if (rank < (matches.attributeRank[slot] as number)) matches.attributeRank[slot] = rank;
-          if (score > (matches.score[slot] as number)) matches.score[slot] = score;
+          if (derivation.typos < (matches.typos[entry] as number)) matches.typos[entry] = derivation.typos;
+          if (derivation.exact) matches.exact[entry] = 1;
+          if (rank < (matches.attributeRank[entry] as number)) matches.attributeRank[entry] = rank;
+          if (score > (matches.score[entry] as number)) matches.score[entry] = score;
         }
       }
       // Prefix matches are many (a short prefix can match 100,000 words) and highlight by `prefix`.
@@ -236,21 +328,42 @@ export class TextIndex {
 
     const primary = (word: string, list: PostingList): void => consider(word, list, true);
     const secondary = (word: string, list: PostingList): void => consider(word, list, false);
-    if (asPrefix) this.words.forEachWithPrefix(term, primary);
-    else {
-      const exact = this.words.get(term);
-      if (exact) primary(term, exact);
-    }
-    if (budget > 0) {
-      this.words.forEachNear(term, budget, secondary);
-      for (const variant of adjacentTranspositions(term)) {
-        if (asPrefix) this.words.forEachWithPrefix(variant, secondary);
-        else {
-          const exact = this.words.get(variant);
-          if (exact) secondary(variant, exact);
-        }
-        if (budget > 1) this.words.forEachNear(variant, budget - 1, secondary);
+    // Fuzzy lookups hand over only words the typo rule accepts, with their typos: what consider()
+    // would do with each proposal, without re-checking the rejected ones.
+    const accepted = (word: string, list: PostingList, typos: number): void => {
+      if (word === term || (asPrefix && word.startsWith(term)) || seenTypoWords.has(word)) return;
+      seenTypoWords.add(word);
+      collect(word, list, { typos, exact: false, prefix: false, weight: TYPO_WEIGHT / typos });
+    };
+    try {
+      if (asPrefix) this.words.forEachWithPrefix(term, primary);
+      else {
+        const exact = this.words.get(term);
+        if (exact) primary(term, exact);
       }
+      if (budget > 0) {
+        this.words.forEachTypoMatch(term, budget, term, budget, asPrefix, accepted);
+        for (const variant of adjacentTranspositions(term)) {
+          if (asPrefix) this.words.forEachWithPrefix(variant, secondary);
+          else {
+            const exact = this.words.get(variant);
+            if (exact) secondary(variant, exact);
+          }
+          // The typo rule is checked per proposal here: these one-edit neighbourhoods are small.
+          if (budget > 1) this.words.forEachNear(variant, budget - 1, secondary);
+        }
+      }
+    } finally {
+      for (let i = 0; i < matches.count; i++) entryOf[matches.slots[i] as number] = -1;
+    }
+    // Trimmed, so the cache holds no slack.
+    const count = matches.count;
+    if (capacity > count + (count >>> 2)) {
+      matches.slots = matches.slots.slice(0, count);
+      matches.typos = matches.typos.slice(0, count);
+      matches.exact = matches.exact.slice(0, count);
+      matches.attributeRank = matches.attributeRank.slice(0, count);
+      matches.score = matches.score.slice(0, count);
     }
     return matches;
   }

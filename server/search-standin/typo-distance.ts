@@ -34,25 +34,35 @@ export function osaDistance(query: string, word: string, asPrefix: boolean): num
   const b = word;
   const rows = a.length + 1;
   const cols = b.length + 1;
-  // Three rolling rows are enough for OSA: the transposition looks two rows back.
-  let before = new Array<number>(cols).fill(0);
-  let previous = Array.from({ length: cols }, (_, j) => j);
-  let current = new Array<number>(cols).fill(0);
+  // Three rolling rows are enough for OSA: the transposition looks two rows back. They are
+  // reused between calls: a fuzzy lookup re-checks hundreds of candidate words.
+  if (rowBuffers[0].length < cols) rowBuffers = [new Int32Array(cols * 2), new Int32Array(cols * 2), new Int32Array(cols * 2)];
+  let [before, previous, current] = rowBuffers;
+  before.fill(0, 0, cols);
+  for (let j = 0; j < cols; j++) previous[j] = j;
+  current.fill(0, 0, cols);
   for (let i = 1; i < rows; i++) {
     current[0] = i;
+    const left = a.charCodeAt(i - 1);
+    const leftBefore = i > 1 ? a.charCodeAt(i - 2) : -1;
     for (let j = 1; j < cols; j++) {
-      const cost = a[i - 1] === b[j - 1] ? 0 : 1;
-      let best = Math.min((previous[j] ?? 0) + 1, (current[j - 1] ?? 0) + 1, (previous[j - 1] ?? 0) + cost);
-      if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1]) {
-        best = Math.min(best, (before[j - 2] ?? 0) + 1);
+      const right = b.charCodeAt(j - 1);
+      const cost = left === right ? 0 : 1;
+      let best = Math.min((previous[j] as number) + 1, (current[j - 1] as number) + 1, (previous[j - 1] as number) + cost);
+      if (i > 1 && j > 1 && left === b.charCodeAt(j - 2) && leftBefore === right) {
+        best = Math.min(best, (before[j - 2] as number) + 1);
       }
       current[j] = best;
     }
     [before, previous, current] = [previous, current, before];
   }
-  if (!asPrefix) return previous[cols - 1] ?? 0;
-  return Math.min(...previous);
+  if (!asPrefix) return previous[cols - 1] as number;
+  let closest = previous[0] as number;
+  for (let j = 1; j < cols; j++) if ((previous[j] as number) < closest) closest = previous[j] as number;
+  return closest;
 }
+
+let rowBuffers: [Int32Array, Int32Array, Int32Array] = [new Int32Array(64), new Int32Array(64), new Int32Array(64)];
 
 /**
  * Number of typos Meilisearch would charge for matching `word` with query term `term`, or null

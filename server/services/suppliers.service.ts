@@ -59,7 +59,9 @@ async function one(m: EntityManager | DataSource, id: string): Promise<Supplier>
 
 function refuseDuplicate(err: unknown): never {
   if ((err as { code?: string }).code === '23505') {
-    throw AppError.conflict('A supplier with this name or key exists already.', { constraint: (err as { constraint?: string }).constraint });
+    throw AppError.conflict('A supplier with this name or key exists already.', {
+      constraint: (err as { constraint?: string }).constraint,
+    });
   }
   throw err;
 }
@@ -109,7 +111,10 @@ export async function updateSupplier(ds: DataSource, actorId: string, id: string
         sets.push(`mapping = $${args.length}`);
       }
       // Wrapped in a SELECT: TypeORM answers a bare UPDATE … RETURNING with [rows, count].
-      const rows = (await m.query(`WITH upd AS (UPDATE supplier SET ${sets.join(', ')} WHERE id = $1 RETURNING id) SELECT id FROM upd`, args)) as unknown[];
+      const rows = (await m.query(
+        `WITH upd AS (UPDATE supplier SET ${sets.join(', ')} WHERE id = $1 RETURNING id) SELECT id FROM upd`,
+        args,
+      )) as unknown[];
       if (rows.length === 0) throw AppError.notFound('Supplier');
       await audit(m, { actorId, action: 'supplier.update', entityType: 'supplier', entityId: id, data: { fields: Object.keys(body) } });
       return one(m, id);

@@ -16,6 +16,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/fit-reports', label: 'Fit reports', roles: ALL },
   { to: '/price-lists', label: 'Price lists', roles: ['buyer', 'admin'] },
   { to: '/suppliers', label: 'Suppliers', roles: ['buyer', 'admin'] },
+  { to: '/catalog', label: 'Catalog', roles: ['buyer', 'admin'] },
   { to: '/team', label: 'Team', roles: ['admin'] },
   { to: '/outbox', label: 'Outbox', roles: ['admin'] },
   { to: '/settings', label: 'Settings', roles: ['admin'] },

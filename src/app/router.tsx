@@ -2,6 +2,7 @@ import { createBrowserRouter, Navigate } from 'react-router-dom';
 import { AppLayout } from '@/components/layout/app-layout';
 import { AcceptInvitePage } from './routes/auth/accept-invite';
 import { BenchPage } from './routes/bench/bench';
+import { CatalogPage } from './routes/catalog/catalog';
 import { ComparePage } from './routes/compare/compare';
 import { FitReportPage } from './routes/fit-reports/fit-report';
 import { FitReportsPage } from './routes/fit-reports/fit-reports';
@@ -32,6 +33,7 @@ export const router = createBrowserRouter([
       { path: 'settings', element: <SettingsPage /> },
       { path: 'price-lists', element: <PriceListsPage /> },
       { path: 'suppliers', element: <SuppliersPage /> },
+      { path: 'catalog', element: <CatalogPage /> },
       { path: 'team', element: <TeamPage /> },
       { path: 'outbox', element: <OutboxPage /> },
       { path: '*', element: <NotFoundPage /> },

@@ -51,7 +51,20 @@ async function timePsqlCopy(databaseUrl: string, path: string, table: string): P
       const started = performance.now();
       const child = spawn(
         'psql',
-        ['-h', url.hostname, '-p', url.port || '5432', '-U', decodeURIComponent(url.username), '-d', url.pathname.slice(1), '-v', 'ON_ERROR_STOP=1', '-qc', sql],
+        [
+          '-h',
+          url.hostname,
+          '-p',
+          url.port || '5432',
+          '-U',
+          decodeURIComponent(url.username),
+          '-d',
+          url.pathname.slice(1),
+          '-v',
+          'ON_ERROR_STOP=1',
+          '-qc',
+          sql,
+        ],
         { env: { ...process.env, PGPASSWORD: decodeURIComponent(url.password) }, stdio: ['ignore', 'ignore', 'pipe'] },
       );
       let stderr = '';
@@ -112,9 +125,14 @@ export async function runPriceListImportBench(databaseUrl: string, rows = 100_00
   const dir = await mkdtemp(join(tmpdir(), 'arcwise-import-bench-'));
   const tag = randomUUID().slice(0, 8).toUpperCase();
   const path = join(dir, 'supplier.csv');
-  const supplierId = ((await ds.query(`INSERT INTO supplier (key, name) VALUES ($1, $2) RETURNING id`, [`bench-${tag.toLowerCase()}`, `Bench supplier ${tag}`])) as {
-    id: string;
-  }[])[0]?.id;
+  const supplierId = (
+    (await ds.query(`INSERT INTO supplier (key, name) VALUES ($1, $2) RETURNING id`, [
+      `bench-${tag.toLowerCase()}`,
+      `Bench supplier ${tag}`,
+    ])) as {
+      id: string;
+    }[]
+  )[0]?.id;
   if (!supplierId) throw new Error('bench supplier not created');
   let listId: string | null = null;
   try {
@@ -126,7 +144,15 @@ export async function runPriceListImportBench(databaseUrl: string, rows = 100_00
       const started = performance.now();
       const list = await uploadPriceList(
         { dataSource: ds, pool },
-        { supplierId, fileName: 'bench.csv', filePath: path, sizeBytes: bytes, actorId: null, maxFileBytes: 500 * 1024 * 1024, flagThresholdPct: 15 },
+        {
+          supplierId,
+          fileName: 'bench.csv',
+          filePath: path,
+          sizeBytes: bytes,
+          actorId: null,
+          maxFileBytes: 500 * 1024 * 1024,
+          flagThresholdPct: 15,
+        },
       );
       listId = list.id;
       const staged = performance.now();

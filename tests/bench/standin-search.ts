@@ -31,7 +31,7 @@ const HERE = dirname(fileURLToPath(import.meta.url));
 const ROOT = resolve(HERE, '../..');
 
 /** mulberry32: a small seeded generator, so every run indexes the same documents. */
-function seededRandom(seed: number): () => number {
+export function seededRandom(seed: number): () => number {
   let a = seed >>> 0;
   return () => {
     a = (a + 0x6d2b79f5) >>> 0;
@@ -109,7 +109,7 @@ function partDocument(i: number, random: () => number): PartDocument {
   };
 }
 
-function partDocuments(count: number, random: () => number): PartDocument[] {
+export function partDocuments(count: number, random: () => number): PartDocument[] {
   return Array.from({ length: count }, (_, i) => partDocument(i, random));
 }
 
@@ -125,9 +125,9 @@ function percentile(sorted: readonly number[], p: number): number {
 }
 
 /** A search body as search.service.ts sends it (limit 20, offset 0, `current = true` first). */
-type SearchBody = { q: string; filter: string[]; facets: string[]; limit: number; offset: number };
+export type SearchBody = { q: string; filter: string[]; facets: string[]; limit: number; offset: number };
 
-interface QueryType {
+export interface QueryType {
   name: string;
   /** The body of the k-th search of this type. */
   make: (k: number) => SearchBody;
@@ -143,7 +143,7 @@ const someCurrentPart = (k: number): number => {
 };
 const numberOf = (i: number): string => `BL${i % 2 ? 'P' : 'C'}${pad(i, 6)}`;
 
-const QUERY_TYPES: QueryType[] = [
+export const QUERY_TYPES: QueryType[] = [
   { name: 'text', make: (k) => body(TEXT_QUERIES[k % TEXT_QUERIES.length] as string, [], ['kind', 'brand']), searches: 400 },
   {
     name: 'text+kind/brand filter',
@@ -221,13 +221,30 @@ interface Sample {
   total: number;
 }
 
+/** Connections the server reset before answering (its keep-alive timer firing while it was busy). */
+let resets = 0;
+
+function isReset(error: unknown): boolean {
+  const cause = error instanceof Error ? (error.cause as { code?: string } | undefined) : undefined;
+  return cause?.code === 'ECONNRESET' || cause?.code === 'UND_ERR_SOCKET';
+}
+
+/** One search; a reset connection is retried (a search is idempotent) and counted, its time included. */
 async function searchOnce(url: string, search: SearchBody): Promise<Sample> {
   const start = performance.now();
-  const response = await fetch(`${url}/indexes/${UID}/search`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify(search),
-  });
+  let response: Response | undefined;
+  for (let attempt = 0; !response; attempt++) {
+    try {
+      response = await fetch(`${url}/indexes/${UID}/search`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify(search),
+      });
+    } catch (error) {
+      if (!isReset(error) || attempt >= 3) throw error;
+      resets++;
+    }
+  }
   const result = (await response.json()) as { hits?: unknown[]; processingTimeMs?: number; estimatedTotalHits?: number; message?: string };
   const ms = performance.now() - start;
   if (!response.ok) throw new Error(`search ${JSON.stringify(search)} failed: ${result.message ?? response.status}`);
@@ -297,13 +314,15 @@ export async function runStandinBench(): Promise<void> {
       const count = Math.max(CONCURRENCY, Math.round(type.searches * scale));
       // Warm-up: the first searches fill per-field caches and let V8 optimise.
       await drive(standin.url, type, 2, Math.min(40, count));
+      resets = 0;
       const one = await drive(standin.url, type, 1, Math.ceil(count / 2));
       const many = await drive(standin.url, type, CONCURRENCY, count);
+      const resetNote = resets > 0 ? `; ${resets} connection resets retried` : '';
       const hits = one.samples.reduce((sum, s) => sum + s.hits, 0) / one.samples.length;
       const total = one.samples.reduce((sum, s) => sum + s.total, 0) / one.samples.length;
       console.log(`  ${type.name} (${hits.toFixed(1)} hits, ~${total.toFixed(0)} estimatedTotalHits)`);
       console.log(`     1 client : ${describe(one.samples, one.seconds)}`);
-      console.log(`    ${String(CONCURRENCY).padStart(2)} clients: ${describe(many.samples, many.seconds)}`);
+      console.log(`    ${String(CONCURRENCY).padStart(2)} clients: ${describe(many.samples, many.seconds)}${resetNote}`);
     }
   } finally {
     await standin.stop();

@@ -24,7 +24,10 @@ export function sampleFile(name: string): Buffer {
 /** A supplier of the test's own, so a commit never moves the demo suppliers' prices other tests read. */
 export async function newSupplier({ agent, token }: Signed, label = 'Test supplier'): Promise<Supplier> {
   const tag = randomUUID().slice(0, 8);
-  const res = await agent.post('/api/suppliers').set('x-csrf-token', token).send({ name: `${label} ${tag}` });
+  const res = await agent
+    .post('/api/suppliers')
+    .set('x-csrf-token', token)
+    .send({ name: `${label} ${tag}` });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return (res.body as { supplier: Supplier }).supplier;
 }

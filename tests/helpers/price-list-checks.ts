@@ -56,7 +56,13 @@ export async function listState(ds: DataSource, listId: string): Promise<ListSta
 
 /** Committed whole: every price of the list written, status, audit. */
 export function isFullyCommitted(s: ListState): boolean {
-  return s.status === 'committed' && s.pricesFromList === s.accepted && s.pricesMatching === s.accepted && s.auditRows === 1 && s.newPartsPresent === s.newRows;
+  return (
+    s.status === 'committed' &&
+    s.pricesFromList === s.accepted &&
+    s.pricesMatching === s.accepted &&
+    s.auditRows === 1 &&
+    s.newPartsPresent === s.newRows
+  );
 }
 
 /** Not committed at all: still staged, no price of it, none of its new numbers made into parts, no audit row. */

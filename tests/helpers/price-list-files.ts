@@ -49,7 +49,18 @@ export function bulkRows(tag: string, n: number, version: number): BulkRow[] {
 export function bulkCsv(rows: readonly BulkRow[]): string {
   return csv([
     STANDARD_HEADER,
-    ...rows.map((r) => [r.partNumber, BULK_BRAND, 'Ignition coil, canister', dollars(r.costCents), dollars(r.listCents), '0.00', 1, null, null, 'coil']),
+    ...rows.map((r) => [
+      r.partNumber,
+      BULK_BRAND,
+      'Ignition coil, canister',
+      dollars(r.costCents),
+      dollars(r.listCents),
+      '0.00',
+      1,
+      null,
+      null,
+      'coil',
+    ]),
   ]);
 }
 

@@ -11,14 +11,24 @@ import { lockListOrRefuse, lockSupplier } from './locks';
  * marked stale, and the audit row. Any failure, or the process dying, leaves none of it.
  */
 
-const INSERT_PARTS_SQL = `
-WITH ins AS (
+/**
+ * New parts and their prices in one statement: the prices join the RETURNING rows of the part
+ * insert by hash instead of looking each new part up again in the index.
+ */
+const INSERT_PARTS_AND_PRICES_SQL = `
+WITH new_part AS (
   INSERT INTO part (brand_id, part_number, part_number_norm, kind, description, gtin)
   SELECT r.brand_id, r.part_number, r.part_number_norm, r.kind, left(coalesce(r.description, ''), 500), r.gtin
     FROM price_list_row r WHERE r.price_list_id = $1 AND r.change = 'new'
   ON CONFLICT (brand_id, part_number_norm) DO NOTHING
+  RETURNING id, brand_id, part_number_norm
+), new_price AS (
+  INSERT INTO supplier_price (supplier_id, part_id, cost_cents, list_cents, core_cents, pack_qty, effective_date, price_list_id, updated_at)
+  SELECT $2, np.id, r.cost_cents, r.list_cents, coalesce(r.core_cents, 0), coalesce(r.pack_qty, 1), current_date, $1, now()
+    FROM new_part np
+    JOIN price_list_row r ON r.price_list_id = $1 AND r.change = 'new' AND r.brand_id = np.brand_id AND r.part_number_norm = np.part_number_norm
   RETURNING 1
-) SELECT count(*)::int AS n FROM ins`;
+) SELECT (SELECT count(*) FROM new_part)::int AS parts, (SELECT count(*) FROM new_price)::int AS prices`;
 
 // Parts are found again by brand and number: a row's part may have been created just now.
 const ROW_PART_JOIN = `JOIN part p ON p.brand_id = r.brand_id AND p.part_number_norm = r.part_number_norm`;
@@ -64,12 +74,17 @@ WITH upd AS (
   RETURNING 1
 ) SELECT count(*)::int AS n FROM upd`;
 
-const INSERT_PRICES_SQL = `
+/**
+ * First prices for parts the catalog had, and — when another request created one of this list's
+ * new numbers meanwhile — the price of that part, which the statement above left out.
+ */
+const INSERT_OTHER_PRICES_SQL = `
 WITH ins AS (
   INSERT INTO supplier_price (supplier_id, part_id, cost_cents, list_cents, core_cents, pack_qty, effective_date, price_list_id, updated_at)
   SELECT $2, p.id, r.cost_cents, r.list_cents, coalesce(r.core_cents, 0), coalesce(r.pack_qty, 1), current_date, $1, now()
     FROM price_list_row r ${ROW_PART_JOIN}
-   WHERE r.price_list_id = $1 AND r.change IN ('new', 'changed') AND r.old_cost_cents IS NULL
+   WHERE r.price_list_id = $1 AND r.old_cost_cents IS NULL AND (r.change = 'changed' OR (r.change = 'new' AND $3))
+     AND NOT EXISTS (SELECT 1 FROM supplier_price x WHERE x.supplier_id = $2 AND x.part_id = p.id AND x.price_list_id = $1)
   ON CONFLICT (supplier_id, part_id) DO UPDATE SET cost_cents = EXCLUDED.cost_cents, list_cents = EXCLUDED.list_cents,
      core_cents = EXCLUDED.core_cents, pack_qty = EXCLUDED.pack_qty, effective_date = EXCLUDED.effective_date,
      price_list_id = EXCLUDED.price_list_id, updated_at = EXCLUDED.updated_at
@@ -110,9 +125,7 @@ interface ListForCommit {
 }
 
 async function count(m: EntityManager, sql: string, params: unknown[]): Promise<number> {
-  const t0 = performance.now();
   const rows = (await m.query(sql, params)) as { n: number }[];
-  console.log(sql.slice(0, 60).replace(/\s+/g, ' '), Math.round(performance.now() - t0));
   return rows[0]?.n ?? 0;
 }
 
@@ -164,18 +177,28 @@ export async function commitPriceList(ds: DataSource, listId: string, actorId: s
     const list = await loadForCommit(m, listId);
     const counts = await refuseUnlessCommittable(m, listId, list);
     const supplierId = list.supplier_id;
+    // As in the diff (see diff.ts): prices written moments ago in this transaction have no
+    // statistics, and a nested loop over them is quadratic. Hash joins stay linear.
+    await m.query(`SET LOCAL enable_nestloop = off`);
 
-    const partsCreated = await count(m, INSERT_PARTS_SQL, [listId]);
+    const created = ((await m.query(INSERT_PARTS_AND_PRICES_SQL, [listId, supplierId])) as { parts: number; prices: number }[])[0];
+    const partsCreated = created?.parts ?? 0;
     const specsStored = (await count(m, INSERT_COIL_SPECS_SQL, [listId])) + (await count(m, INSERT_PLUG_SPECS_SQL, [listId]));
-    const pricesWritten = (await count(m, UPDATE_PRICES_SQL, [listId, supplierId])) + (await count(m, INSERT_PRICES_SQL, [listId, supplierId]));
+    const pricesWritten =
+      (created?.prices ?? 0) +
+      (await count(m, UPDATE_PRICES_SQL, [listId, supplierId])) +
+      (await count(m, INSERT_OTHER_PRICES_SQL, [listId, supplierId, partsCreated < counts.new]));
     const accepted = counts.new + counts.changed + counts.unchanged;
     if (pricesWritten !== accepted) {
       // Only a change to this supplier's prices outside price lists can do this; the preview no longer holds.
       throw AppError.conflict(`The catalog changed since the preview (${pricesWritten} of ${accepted} prices matched): preview again.`);
     }
+    await m.query(`SET LOCAL enable_nestloop = on`);
     const supersessionsLinked = await count(m, LINK_SUPERSESSIONS_SQL, [listId]);
     if ((await count(m, LOOP_CHECK_SQL, [listId])) > 0) {
-      throw AppError.conflict('A supersession in this file would now make a loop with a catalog edit made since the preview: preview again.');
+      throw AppError.conflict(
+        'A supersession in this file would now make a loop with a catalog edit made since the preview: preview again.',
+      );
     }
 
     const applied: PriceListApplied = { partsCreated, specsStored, pricesWritten, supersessionsLinked };

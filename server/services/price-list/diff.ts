@@ -33,39 +33,38 @@ UPDATE price_list_row r SET
   supersedes_part_id = NULL,
   supersession = NULL
 FROM (
-  SELECT r0.line, b.id AS brand_id, p.id AS part_id, p.kind AS part_kind,
-         sp.cost_cents AS old_cost, sp.list_cents AS old_list, sp.core_cents AS old_core, sp.pack_qty AS old_pack,
-         CASE WHEN b.id IS NULL THEN 'brand'
-              WHEN p.id IS NULL AND r0.kind IS NULL THEN 'kind'
-              WHEN p.id IS NOT NULL AND r0.kind IS NOT NULL AND r0.kind <> p.kind THEN 'kind'
-              WHEN p.id IS NULL AND r0.plug IS NOT NULL AND hc.code IS NULL THEN 'heatCode' END AS reject_field,
-         CASE WHEN b.id IS NULL THEN format('unknown brand "%s": add it to the catalog first', r0.brand)
-              WHEN p.id IS NULL AND r0.kind IS NULL
-                THEN format('%s is a new number and the file does not say whether it is a coil or a plug', r0.part_number)
-              WHEN p.id IS NOT NULL AND r0.kind IS NOT NULL AND r0.kind <> p.kind
-                THEN format('the file says %s, but the catalog has %s as a %s', r0.kind, p.part_number, p.kind)
-              WHEN p.id IS NULL AND r0.plug IS NOT NULL AND hc.code IS NULL
-                THEN format('heat code "%s" is not in the %s heat table', r0.plug->>'heatCode', b.name) END AS reject_message
-    FROM price_list_row r0
-    LEFT JOIN brand b ON b.name_norm = r0.brand_norm
-    LEFT JOIN part p ON p.brand_id = b.id AND p.part_number_norm = r0.part_number_norm
-    LEFT JOIN supplier_price sp ON sp.supplier_id = $2 AND sp.part_id = p.id
-    LEFT JOIN brand_heat_code hc ON hc.brand_id = b.id AND hc.code = r0.plug->>'heatCode'
-   WHERE r0.price_list_id = $1 AND NOT r0.retracted
+  SELECT c.*,
+         CASE WHEN c.brand_id IS NULL THEN 'brand'
+              WHEN c.same_part > 1 THEN 'partNumber'
+              WHEN c.part_id IS NULL AND c.kind IS NULL THEN 'kind'
+              WHEN c.part_id IS NOT NULL AND c.kind IS NOT NULL AND c.kind <> c.part_kind THEN 'kind'
+              WHEN c.part_id IS NULL AND c.heat_code IS NOT NULL AND NOT c.heat_code_known THEN 'heatCode' END AS reject_field,
+         CASE WHEN c.brand_id IS NULL THEN format('unknown brand "%s": add it to the catalog first', c.brand)
+              -- The parser folds brands by case and spacing; the catalog may fold two more spellings into one brand.
+              WHEN c.same_part > 1 THEN format('the same part (%s %s) is on %s lines, %s to %s; all of them are rejected',
+                                               c.brand_name, c.part_number_norm, c.same_part, c.first_line, c.last_line)
+              WHEN c.part_id IS NULL AND c.kind IS NULL
+                THEN format('%s is a new number and the file does not say whether it is a coil or a plug', c.part_number)
+              WHEN c.part_id IS NOT NULL AND c.kind IS NOT NULL AND c.kind <> c.part_kind
+                THEN format('the file says %s, but the catalog has %s as a %s', c.kind, c.catalog_number, c.part_kind)
+              WHEN c.part_id IS NULL AND c.heat_code IS NOT NULL AND NOT c.heat_code_known
+                THEN format('heat code "%s" is not in the %s heat table', c.heat_code, c.brand_name) END AS reject_message
+    FROM (
+      SELECT r0.line, r0.brand, r0.part_number, r0.part_number_norm, r0.kind, b.id AS brand_id, b.name AS brand_name,
+             p.id AS part_id, p.kind AS part_kind, p.part_number AS catalog_number,
+             sp.cost_cents AS old_cost, sp.list_cents AS old_list, sp.core_cents AS old_core, sp.pack_qty AS old_pack,
+             r0.plug->>'heatCode' AS heat_code, hc.code IS NOT NULL AS heat_code_known,
+             count(*) OVER w AS same_part, min(r0.line) OVER w AS first_line, max(r0.line) OVER w AS last_line
+        FROM price_list_row r0
+        LEFT JOIN brand b ON b.name_norm = r0.brand_norm
+        LEFT JOIN part p ON p.brand_id = b.id AND p.part_number_norm = r0.part_number_norm
+        LEFT JOIN supplier_price sp ON sp.supplier_id = $2 AND sp.part_id = p.id
+        LEFT JOIN brand_heat_code hc ON hc.brand_id = b.id AND hc.code = r0.plug->>'heatCode'
+       WHERE r0.price_list_id = $1 AND NOT r0.retracted
+      WINDOW w AS (PARTITION BY b.id, r0.part_number_norm)
+    ) c
 ) d
 WHERE r.price_list_id = $1 AND r.line = d.line`;
-
-/** One part on two lines whose brands only the catalog tells apart as the same (the parser folds case and spacing). */
-const DUPLICATES_SQL = `
-UPDATE price_list_row r SET change = 'rejected', reject_field = 'partNumber',
-  reject_message = format('the same part (%s) is on lines %s; all of them are rejected', r.part_number, array_to_string(d.lines, ', '))
-FROM (
-  SELECT line, count(*) OVER w AS n, array_agg(line) OVER w AS lines
-    FROM price_list_row
-   WHERE price_list_id = $1 AND NOT retracted AND change <> 'rejected'
-  WINDOW w AS (PARTITION BY brand_id, part_number_norm ORDER BY line ROWS BETWEEN UNBOUNDED PRECEDING AND UNBOUNDED FOLLOWING)
-) d
-WHERE d.n > 1 AND r.price_list_id = $1 AND r.line = d.line`;
 
 const CATALOG_ERRORS_SQL = `
 INSERT INTO price_list_row_error (price_list_id, line, "column", field, message, source)
@@ -167,15 +166,16 @@ export async function diffStagedList(
 ): Promise<DiffResult> {
   const { listId } = opts;
   await client.query(`DELETE FROM price_list_row_error WHERE price_list_id = $1 AND source = 'catalog'`, [listId]);
-  // Rows COPY just wrote have no statistics yet, so the planner takes the list for a few rows and
-  // may nest loops over it; hash joins suit every size of list here, from 40 rows to a million.
+  // Rows written in this transaction have no statistics yet, so the planner takes the list for a
+  // few rows and may nest loops over it, which is quadratic when it is large; hash joins are linear
+  // for every size of list, from 40 rows to a million.
   await client.query(`SET LOCAL enable_nestloop = off`);
-  console.time('CLASSIFY_SQL'); await client.query(CLASSIFY_SQL, [listId, opts.supplierId, opts.flagThresholdPct]); console.timeEnd('CLASSIFY_SQL');
-  console.time('DUPLICATES_SQL'); await client.query(DUPLICATES_SQL, [listId]); console.timeEnd('DUPLICATES_SQL');
+  await client.query(CLASSIFY_SQL, [listId, opts.supplierId, opts.flagThresholdPct]);
+  await client.query(CATALOG_ERRORS_SQL, [listId, JSON.stringify(opts.headers)]);
+  await client.query(SUPERSESSION_SQL, [listId]);
+  // The walk up supersession chains is a handful of index lookups per link: loops are right there.
   await client.query(`SET LOCAL enable_nestloop = on`);
-  console.time('CATALOG_ERRORS_SQL'); await client.query(CATALOG_ERRORS_SQL, [listId, JSON.stringify(opts.headers)]); console.timeEnd('CATALOG_ERRORS_SQL');
-  console.time('SUPERSESSION_SQL'); await client.query(SUPERSESSION_SQL, [listId]); console.timeEnd('SUPERSESSION_SQL');
-  console.time('LOOPS_SQL'); await client.query(LOOPS_SQL, [listId]); console.timeEnd('LOOPS_SQL');
+  await client.query(LOOPS_SQL, [listId]);
   const row = (await client.query<CountsRow>(COUNTS_SQL, [listId])).rows[0];
   if (!row) throw new Error('price-list counts query returned nothing');
   const counts: PriceListCounts = {

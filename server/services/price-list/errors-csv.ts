@@ -94,7 +94,10 @@ function stagedValue(e: ErrorLine, field: PriceListField): string {
  * formulas (=, +, -, @) so a spreadsheet shows supplier text instead of running it.
  */
 export async function writeErrorsCsv(ds: DataSource, listId: string, out: Writable): Promise<void> {
-  const lists = (await ds.query(`SELECT columns, mapping FROM price_list WHERE id = $1`, [listId])) as { columns: string[]; mapping: Mapping }[];
+  const lists = (await ds.query(`SELECT columns, mapping FROM price_list WHERE id = $1`, [listId])) as {
+    columns: string[];
+    mapping: Mapping;
+  }[];
   const list = lists[0];
   if (!list) throw AppError.notFound('Price list');
   const check = validateMapping(list.columns, list.mapping);

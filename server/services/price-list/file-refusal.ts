@@ -14,7 +14,12 @@ export function fileRefusal(err: PriceListFileError, maxFileBytes: number): AppE
   const status = statusOf(err.code);
   const details: PriceListFileRefusalDetails = { reason: err.code, ...err.details };
   if (err.code === 'too-large') details.limitMb = Math.round((maxFileBytes / 1024 / 1024) * 10) / 10;
-  return new AppError(status, status === 413 ? 'payload_too_large' : status === 415 ? 'unsupported_file' : 'bad_request', err.message, details);
+  return new AppError(
+    status,
+    status === 413 ? 'payload_too_large' : status === 415 ? 'unsupported_file' : 'bad_request',
+    err.message,
+    details,
+  );
 }
 
 export function tooLarge(maxFileBytes: number): AppError {

@@ -53,7 +53,9 @@ export async function uploadPriceList(deps: IntakeDeps, input: UploadInput): Pro
   const remembered = await supplierMapping(ds, input.supplierId);
   const sha256 = await sha256OfFile(input.filePath);
   await refuseCommittedFile(ds, input.supplierId, sha256);
-  await ds.query(`UPDATE price_list SET status = 'failed' WHERE status = 'processing' AND updated_at < now() - interval '${ABANDONED_AFTER}'`);
+  await ds.query(
+    `UPDATE price_list SET status = 'failed' WHERE status = 'processing' AND updated_at < now() - interval '${ABANDONED_AFTER}'`,
+  );
   const listId = input.id ?? randomUUID();
   await stageList(deps, {
     listId,
@@ -172,7 +174,13 @@ export async function discardPriceList(ds: DataSource, listId: string, actorId: 
     ]);
     await m.query(`DELETE FROM price_list_row WHERE price_list_id = $1`, [listId]);
     await m.query(`DELETE FROM price_list_file_chunk WHERE price_list_id = $1`, [listId]);
-    await audit(m, { actorId, action: 'price-list.discard', entityType: 'price_list', entityId: listId, data: { fileName: list.file_name } });
+    await audit(m, {
+      actorId,
+      action: 'price-list.discard',
+      entityType: 'price_list',
+      entityId: listId,
+      data: { fileName: list.file_name },
+    });
   });
   return getPriceList(ds, listId);
 }

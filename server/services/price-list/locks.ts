@@ -12,7 +12,8 @@ export interface Queryable {
  */
 export async function lockListOrRefuse(q: Queryable, listId: string): Promise<void> {
   // Two-key form: its own key space, apart from the one-key supplier locks.
-  const rows = (await q.query(`SELECT pg_try_advisory_xact_lock(2, hashtext($1)) AS ok`, [listId])) as { ok: boolean }[] | { rows: { ok: boolean }[] };
+  const rows = (await q.query(`SELECT pg_try_advisory_xact_lock(2, hashtext($1)) AS ok`, [listId])) as
+    { ok: boolean }[] | { rows: { ok: boolean }[] };
   const ok = Array.isArray(rows) ? rows[0]?.ok : rows.rows[0]?.ok;
   if (!ok) throw AppError.conflict('This price list is being processed by another request; try again in a moment.');
 }

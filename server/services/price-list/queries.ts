@@ -59,7 +59,10 @@ export async function listChanges(ds: DataSource, id: string, q: PriceListChange
   }
   if (q.flagged) conditions.push(q.flagged === 'true' ? `flagged` : `NOT flagged`);
   const where = conditions.join(' AND ');
-  const rows = (await ds.query(`SELECT ${CHANGE_COLUMNS} FROM price_list_row WHERE ${where} ORDER BY line LIMIT ${q.limit} OFFSET ${q.offset}`, params)) as ChangeRecord[];
+  const rows = (await ds.query(
+    `SELECT ${CHANGE_COLUMNS} FROM price_list_row WHERE ${where} ORDER BY line LIMIT ${q.limit} OFFSET ${q.offset}`,
+    params,
+  )) as ChangeRecord[];
   const total = (await ds.query(`SELECT count(*)::int AS n FROM price_list_row WHERE ${where}`, params)) as { n: number }[];
   return { changes: rows.map(presentChange), total: total[0]?.n ?? 0 };
 }

@@ -25,7 +25,13 @@ function keepCell(cell: string): string {
 
 export function toEntries(errors: readonly RowError[], cells: readonly string[] | null): RowErrorEntry[] {
   const raw = cells === null ? null : cells.map(keepCell);
-  return errors.map((e) => ({ line: e.line, column: e.column === null ? null : wellFormed(e.column), field: e.field, message: wellFormed(e.message), raw }));
+  return errors.map((e) => ({
+    line: e.line,
+    column: e.column === null ? null : wellFormed(e.column),
+    field: e.field,
+    message: wellFormed(e.message),
+    raw,
+  }));
 }
 
 /** Writes rejected-line reasons in one statement per batch, on the connection (and transaction) given. */

@@ -94,16 +94,15 @@ export async function stageList(deps: IntakeDeps, run: StageRun): Promise<void> 
   const client = await deps.pool.connect();
   let failed = false;
   try {
-    const T0 = performance.now(); const T = (l: string) => console.log(l, Math.round(performance.now() - T0));
     await client.query('BEGIN');
     await lockListOrRefuse(client, run.listId);
     if (!run.create) {
       await client.query(`DELETE FROM price_list_row WHERE price_list_id = $1`, [run.listId]);
       await client.query(`DELETE FROM price_list_row_error WHERE price_list_id = $1`, [run.listId]);
     }
-    const { summary } = await stageRows(client, run.listId, parsed); T('copied');
+    const { summary } = await stageRows(client, run.listId, parsed);
     if (run.create) await storeFileChunks(client, run.listId, run.create.filePath);
-    T('chunks'); progress.comparing(summary.dataLines);
+    progress.comparing(summary.dataLines);
     await lockSupplier(client, run.supplierId);
     const { head } = parsed;
     const diff = await diffStagedList(client, {
@@ -113,7 +112,7 @@ export async function stageList(deps: IntakeDeps, run: StageRun): Promise<void> 
       headers: fieldHeaders(head.resolved),
       dataLines: summary.dataLines,
     });
-    T('diff'); await progress.close();
+    await progress.close();
     const updated = await client.query(
       `UPDATE price_list SET status = 'staged', stale = false, encoding = $2, delimiter = $3, columns = $4, mapping = $5,
               mapping_source = $6, data_lines = $7, counts = $8, flagged = $9, flag_threshold_pct = $10, progress = $11, updated_at = now()
@@ -133,7 +132,7 @@ export async function stageList(deps: IntakeDeps, run: StageRun): Promise<void> 
       ],
     );
     if (updated.rowCount !== 1) throw AppError.conflict('This price list was committed or discarded meanwhile.');
-    await client.query('COMMIT'); T('commit');
+    await client.query('COMMIT');
   } catch (err) {
     failed = true;
     await closeParse(parsed);

@@ -42,12 +42,17 @@ class StagingCopy {
     this.stream = this.open();
   }
 
-  abort(err: Error): void {
+  /** Sends CopyFail, so PostgreSQL drops what this COPY took, and waits for its answer. */
+  async abort(err: Error): Promise<void> {
     this.stream.destroy(err);
+    await finished(this.stream).catch(() => undefined);
   }
 
   private open(): CopyStreamQuery {
-    return this.client.query(copyFrom(STAGING_COPY_SQL));
+    const stream = this.client.query(copyFrom(STAGING_COPY_SQL));
+    // Its errors reach the caller through finished() or abort(); none may go unheard.
+    stream.on('error', () => undefined);
+    return stream;
   }
 
   private async flush(): Promise<void> {
@@ -91,7 +96,7 @@ export async function stageRows(client: pg.PoolClient, listId: string, parsed: P
     }
     await copy.end();
   } catch (err) {
-    copy.abort(err instanceof Error ? err : new Error(String(err)));
+    await copy.abort(err instanceof Error ? err : new Error(String(err)));
     throw err;
   }
   if (summary === null) throw new Error('price-list events ended without a summary');

@@ -26,7 +26,9 @@ export function receivePriceListUpload(req: Request, res: Response, maxFileBytes
       if (err === undefined || err === null) return resolve();
       if (err instanceof multer.MulterError) {
         if (err.code === 'LIMIT_FILE_SIZE') return reject(tooLarge(maxFileBytes));
-        return reject(AppError.badRequest(`${err.field ?? 'upload'}: ${err.message}`, [{ field: err.field ?? 'file', message: err.message }]));
+        return reject(
+          AppError.badRequest(`${err.field ?? 'upload'}: ${err.message}`, [{ field: err.field ?? 'file', message: err.message }]),
+        );
       }
       // A failing disk is ours to log (500); anything else from the form parser is a broken upload.
       if (typeof err === 'object' && 'syscall' in err) return reject(err);

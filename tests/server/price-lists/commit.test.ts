@@ -27,7 +27,14 @@ const SPEC_HEADER = PLUG_SPEC_FIELDS.map((f) => FIELD_LABELS[f]);
 const HEADER = [...STANDARD_HEADER, ...SPEC_HEADER];
 const noSpec = (): Cell[] => PLUG_SPEC_FIELDS.map(() => null);
 
-function line(number: string, brand: string, cost: string, list: string, kind: string, opts: { supersedes?: string; spec?: boolean; pack?: number } = {}): Cell[] {
+function line(
+  number: string,
+  brand: string,
+  cost: string,
+  list: string,
+  kind: string,
+  opts: { supersedes?: string; spec?: boolean; pack?: number } = {},
+): Cell[] {
   return [
     number,
     brand,
@@ -122,7 +129,14 @@ describe('commit and discard', () => {
          FROM part p LEFT JOIN part s ON s.id = p.superseded_by_id LEFT JOIN plug_spec ps ON ps.part_id = p.id
          LEFT JOIN coil_spec cs ON cs.part_id = p.id WHERE p.part_number LIKE $1 ORDER BY p.part_number`,
       [`%T${tag}%`],
-    )) as { part_number: string; kind: string; superseded_by: string | null; heat_code: string | null; reach_mm: number | null; coil_spec: boolean }[];
+    )) as {
+      part_number: string;
+      kind: string;
+      superseded_by: string | null;
+      heat_code: string | null;
+      reach_mm: number | null;
+      coil_spec: boolean;
+    }[];
     expect(parts).toEqual([
       { part_number: `QW-IC T${tag}2`, kind: 'coil', superseded_by: `QW-IC T${tag}3`, heat_code: null, reach_mm: null, coil_spec: false },
       { part_number: `QW-IC T${tag}3`, kind: 'coil', superseded_by: null, heat_code: null, reach_mm: null, coil_spec: false },
@@ -133,7 +147,9 @@ describe('commit and discard', () => {
       actor_id: string;
       data: { sha256: string };
     }[];
-    expect(audits).toEqual([{ action: 'price-list.commit', actor_id: staged.createdBy?.id, data: expect.objectContaining({ sha256: staged.sha256 }) }]);
+    expect(audits).toEqual([
+      { action: 'price-list.commit', actor_id: staged.createdBy?.id, data: expect.objectContaining({ sha256: staged.sha256 }) },
+    ]);
 
     // The supplier remembers the mapping and shows the date of its last list.
     const suppliers = ((await buyer.agent.get('/api/suppliers').expect(200)).body as { suppliers: Supplier[] }).suppliers;
@@ -142,9 +158,19 @@ describe('commit and discard', () => {
     expect(mine?.lastPriceListAt).toBe(committed.committedAt);
 
     // The Counter finds the new part, and the superseded number leads to its successor.
-    const found = (await buyer.agent.get('/api/search').query({ q: `QW-SP T${tag}1` }).expect(200)).body as SearchResponse;
+    const found = (
+      await buyer.agent
+        .get('/api/search')
+        .query({ q: `QW-SP T${tag}1` })
+        .expect(200)
+    ).body as SearchResponse;
     expect(found.hits[0]?.partNumber).toBe(`QW-SP T${tag}1`);
-    const successor = (await buyer.agent.get('/api/search').query({ q: `QW-IC T${tag}2` }).expect(200)).body as SearchResponse;
+    const successor = (
+      await buyer.agent
+        .get('/api/search')
+        .query({ q: `QW-IC T${tag}2` })
+        .expect(200)
+    ).body as SearchResponse;
     expect(successor.hits[0]?.partNumber).toBe(`QW-IC T${tag}3`);
 
     // The summary reaches the buyers through the SMTP catcher, not a disabled one.
@@ -174,13 +200,20 @@ describe('commit and discard', () => {
   it('discard leaves the catalog and the prices untouched', async () => {
     const tag = runTag();
     const supplier = await newSupplier(buyer, 'Discard');
-    const base = await stage(buyer, { supplierId: supplier.id, file: csv([HEADER, line('QW-IC 3140', 'Quaywell', '26.00', '53.00', 'coil')]) });
+    const base = await stage(buyer, {
+      supplierId: supplier.id,
+      file: csv([HEADER, line('QW-IC 3140', 'Quaywell', '26.00', '53.00', 'coil')]),
+    });
     expect((await post(buyer, `/api/price-lists/${base.id}/commit`)).status).toBe(200);
     const before = await prices(supplier.id);
 
     const other = await stage(buyer, {
       supplierId: supplier.id,
-      file: csv([HEADER, line('QW-IC 3140', 'Quaywell', '99.00', '199.00', 'coil'), line(`QW-IC D${tag}`, 'Quaywell', '5.00', '9.00', 'coil')]),
+      file: csv([
+        HEADER,
+        line('QW-IC 3140', 'Quaywell', '99.00', '199.00', 'coil'),
+        line(`QW-IC D${tag}`, 'Quaywell', '5.00', '9.00', 'coil'),
+      ]),
     });
     expect(other.counts).toMatchObject({ new: 1, changed: 1 });
     const res = await post(buyer, `/api/price-lists/${other.id}/discard`);
@@ -218,11 +251,19 @@ describe('commit and discard', () => {
     const supplier = await newSupplier(buyer, 'Stale');
     const one = await stage(buyer, {
       supplierId: supplier.id,
-      file: csv([HEADER, line('QW-IC 3140', 'Quaywell', '26.00', '53.00', 'coil'), line('QW-IC 3150', 'Quaywell', '30.00', '60.00', 'coil')]),
+      file: csv([
+        HEADER,
+        line('QW-IC 3140', 'Quaywell', '26.00', '53.00', 'coil'),
+        line('QW-IC 3150', 'Quaywell', '30.00', '60.00', 'coil'),
+      ]),
     });
     const two = await stage(buyer, {
       supplierId: supplier.id,
-      file: csv([HEADER, line('QW-IC 3140', 'Quaywell', '26.00', '53.00', 'coil'), line('QW-IC 3150', 'Quaywell', '31.00', '60.00', 'coil')]),
+      file: csv([
+        HEADER,
+        line('QW-IC 3140', 'Quaywell', '26.00', '53.00', 'coil'),
+        line('QW-IC 3150', 'Quaywell', '31.00', '60.00', 'coil'),
+      ]),
     });
     expect(two.counts).toMatchObject({ changed: 2, firstPrices: 2, unchanged: 0 });
     expect((await post(buyer, `/api/price-lists/${one.id}/commit`)).status).toBe(200);
@@ -250,7 +291,11 @@ describe('commit and discard', () => {
       [one.id, 'committed', false],
     ]);
     for (const l of history.priceLists) {
-      expect(l).toMatchObject({ fileName: 'prices.csv', createdBy: { id: expect.any(String), name: expect.any(String) }, committedAt: expect.any(String) });
+      expect(l).toMatchObject({
+        fileName: 'prices.csv',
+        createdBy: { id: expect.any(String), name: expect.any(String) },
+        committedAt: expect.any(String),
+      });
       expect(l.sha256).toMatch(/^[0-9a-f]{64}$/);
       expect(l.mapping).toMatchObject({ 'Part Number': 'partNumber' });
     }

@@ -23,13 +23,13 @@ describe('two commits for one supplier at the same time', () => {
     const tag = runTag();
     const supplier = await newSupplier(buyer, 'Concurrent');
     // Same parts, every price different between the two lists; both staged against the same catalog.
-    console.time("stage1"); const one = await stage(buyer, { supplierId: supplier.id, file: bulkCsv(bulkRows(tag, ROWS, 1)) });
-    console.timeEnd("stage1"); console.time("stage2"); const two = await stage(other, { supplierId: supplier.id, file: bulkCsv(bulkRows(tag, ROWS, 2)) });
-    console.timeEnd("stage2"); console.time("commits"); expect(one.counts?.new).toBe(ROWS);
+    const one = await stage(buyer, { supplierId: supplier.id, file: bulkCsv(bulkRows(tag, ROWS, 1)) });
+    const two = await stage(other, { supplierId: supplier.id, file: bulkCsv(bulkRows(tag, ROWS, 2)) });
+    expect(one.counts?.new).toBe(ROWS);
     expect(two.counts?.new).toBe(ROWS);
 
     const [a, b] = await Promise.all([post(buyer, `/api/price-lists/${one.id}/commit`), post(other, `/api/price-lists/${two.id}/commit`)]);
-    console.timeEnd("commits"); expect([a.status, b.status].sort()).toEqual([200, 409]);
+    expect([a.status, b.status].sort()).toEqual([200, 409]);
     const [winner, loser] = a.status === 200 ? [one, two] : [two, one];
     const refusal = a.status === 409 ? a : b;
     expect(refusal.body.error.message).toMatch(/preview it again|being processed/);
@@ -46,7 +46,9 @@ describe('two commits for one supplier at the same time', () => {
     const last = await listState(t.deps.dataSource, loser.id);
     expect(isFullyCommitted(last)).toBe(true);
     expect(last.pricesMatching).toBe(ROWS);
-    const count = (await t.deps.dataSource.query(`SELECT count(*)::int AS n FROM supplier_price WHERE supplier_id = $1`, [supplier.id])) as { n: number }[];
+    const count = (await t.deps.dataSource.query(`SELECT count(*)::int AS n FROM supplier_price WHERE supplier_id = $1`, [
+      supplier.id,
+    ])) as { n: number }[];
     expect(count[0]?.n).toBe(ROWS);
   });
 });

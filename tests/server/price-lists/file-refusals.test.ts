@@ -68,7 +68,13 @@ describe('files refused as a whole', () => {
     },
     {
       name: 'a column named twice',
-      file: () => Buffer.from(csv([[...STANDARD_HEADER, 'Cost'], [...ROW, '1.00']])),
+      file: () =>
+        Buffer.from(
+          csv([
+            [...STANDARD_HEADER, 'Cost'],
+            [...ROW, '1.00'],
+          ]),
+        ),
       status: 400,
       code: 'bad_request',
       reason: 'duplicate-header',

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Mapping } from '../../../shared/price-list/mapping';
 import type { PriceList, PriceListChange, PriceListChanges, PriceListErrors } from '../../../shared/schemas/price-list';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { post, SAMPLE, sampleFile, stage, supplierIdByKey, type Signed } from '../../helpers/price-list-api';
@@ -10,7 +11,7 @@ import { createTestApp, signIn, type TestApp } from '../../helpers/test-app';
  * demo prices stay as seeded.
  */
 
-const STANDARD_MAPPING = {
+const STANDARD_MAPPING: Mapping = {
   'Part Number': 'partNumber',
   Brand: 'brand',
   Description: 'description',
@@ -24,7 +25,10 @@ const STANDARD_MAPPING = {
 };
 
 async function changesOf(buyer: Signed, id: string, query: Record<string, string> = {}): Promise<PriceListChange[]> {
-  const res = await buyer.agent.get(`/api/price-lists/${id}/changes`).query({ limit: 1000, ...query }).expect(200);
+  const res = await buyer.agent
+    .get(`/api/price-lists/${id}/changes`)
+    .query({ limit: 1000, ...query })
+    .expect(200);
   return (res.body as PriceListChanges).changes;
 }
 
@@ -64,7 +68,15 @@ describe('preview of the sample files', () => {
 
     it('shows each price change old → new with its percent', async () => {
       const changed = await changesOf(buyer, list.id, { type: 'changed' });
-      const view = changed.map((c) => [c.partNumber, c.oldCostCents, c.newCostCents, c.costChangePct, c.oldListCents, c.newListCents, c.flagged]);
+      const view = changed.map((c) => [
+        c.partNumber,
+        c.oldCostCents,
+        c.newCostCents,
+        c.costChangePct,
+        c.oldListCents,
+        c.newListCents,
+        c.flagged,
+      ]);
       expect(view).toEqual([
         ['QW-IC 3101', 2450, 2520, 2.9, 4999, 5199, false],
         ['QW-CP 5202', 3480, 3390, -2.6, 6999, 6999, false],
@@ -99,7 +111,10 @@ describe('preview of the sample files', () => {
     });
 
     it('pages the tables', async () => {
-      const res = await buyer.agent.get(`/api/price-lists/${list.id}/changes`).query({ type: 'unchanged', offset: 30, limit: 10 }).expect(200);
+      const res = await buyer.agent
+        .get(`/api/price-lists/${list.id}/changes`)
+        .query({ type: 'unchanged', offset: 30, limit: 10 })
+        .expect(200);
       expect((res.body as PriceListChanges).total).toBe(31);
       expect((res.body as PriceListChanges).changes).toHaveLength(1);
     });
@@ -127,7 +142,9 @@ describe('preview of the sample files', () => {
     ]);
     const all = await changesOf(buyer, list.id);
     expect(all.find((c) => c.partNumber === 'QWIC-3160')?.description).toBe('Coil-on-plug ignition coil; 3-pin "E" connector');
-    expect(all.find((c) => c.partNumber === 'QWCP-5203')?.description).toBe('Coil pack, remanufactured\nCore charge refunded on return of the old pack');
+    expect(all.find((c) => c.partNumber === 'QWCP-5203')?.description).toBe(
+      'Coil pack, remanufactured\nCore charge refunded on return of the old pack',
+    );
     // The record after the embedded line break is on line 14 of the file (26 lines, 25 records).
     expect(all.find((c) => c.partNumber === 'QWSP-1406')?.line).toBe(14);
   });
@@ -155,7 +172,7 @@ describe('preview of the sample files', () => {
 
   it('a new mapping confirmed by the buyer re-reads the kept file', async () => {
     // Cost and list swapped by mistake: every known part then looks changed.
-    const wrong = { ...STANDARD_MAPPING, Cost: 'list', List: 'cost' };
+    const wrong: Mapping = { ...STANDARD_MAPPING, Cost: 'list', List: 'cost' };
     const list = await stage(buyer, { supplierId: pellworth, file: sampleFile(SAMPLE.clean), mapping: wrong });
     expect(list.mappingSource).toBe('given');
     expect(list.counts).toMatchObject({ new: 4, changed: 36, unchanged: 0 });

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { PriceList, PriceListChanges, PriceListErrors, Supplier } from '../../../shared/schemas/price-list';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { newSupplier, stage, type Signed } from '../../helpers/price-list-api';
-import { csv, gtin, runTag, STANDARD_HEADER, type Cell } from '../../helpers/price-list-files';
+import { csv, runTag, STANDARD_HEADER, type Cell } from '../../helpers/price-list-files';
 import { createTestApp, signIn, type TestApp } from '../../helpers/test-app';
 
 const HEADER = [...STANDARD_HEADER, 'Gap mm'];
@@ -20,7 +20,19 @@ const coil = (number: string, over: Partial<Record<'cost' | 'list' | 'gtin' | 'k
   over.kind ?? 'coil',
   null,
 ];
-const plug = (number: string, gap: string, brand = 'Quaywell'): Cell[] => [number, brand, 'Spark plug', '3.25', '7.49', '0.00', 4, null, null, 'plug', gap];
+const plug = (number: string, gap: string, brand = 'Quaywell'): Cell[] => [
+  number,
+  brand,
+  'Spark plug',
+  '3.25',
+  '7.49',
+  '0.00',
+  4,
+  null,
+  null,
+  'plug',
+  gap,
+];
 
 describe('lines rejected one by one while the others go on', () => {
   let t: TestApp;

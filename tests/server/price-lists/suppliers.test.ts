@@ -51,7 +51,10 @@ describe('suppliers', () => {
   it('refuses a second supplier of the same name with a 409 that says so', async () => {
     const name = `Twin Supply ${randomUUID().slice(0, 8)}`;
     await buyer.agent.post('/api/suppliers').set('x-csrf-token', buyer.token).send({ name }).expect(201);
-    const res = await buyer.agent.post('/api/suppliers').set('x-csrf-token', buyer.token).send({ name, key: `other-${randomUUID().slice(0, 8)}` });
+    const res = await buyer.agent
+      .post('/api/suppliers')
+      .set('x-csrf-token', buyer.token)
+      .send({ name, key: `other-${randomUUID().slice(0, 8)}` });
     expect(res.status).toBe(409);
     expect(res.body.error.message).toMatch(/name or key exists/);
   });
@@ -77,7 +80,11 @@ describe('suppliers', () => {
       .set('x-csrf-token', buyer.token)
       .send({ phone: '+1 555 0111', contactEmail: null, mapping: { SKU: 'partNumber' } });
     expect(res.status).toBe(200);
-    expect((res.body as { supplier: Supplier }).supplier).toMatchObject({ phone: '+1 555 0111', contactEmail: null, mapping: { SKU: 'partNumber' } });
+    expect((res.body as { supplier: Supplier }).supplier).toMatchObject({
+      phone: '+1 555 0111',
+      contactEmail: null,
+      mapping: { SKU: 'partNumber' },
+    });
     const missing = await buyer.agent.patch(`/api/suppliers/${randomUUID()}`).set('x-csrf-token', buyer.token).send({ phone: '1' });
     expect(missing.status).toBe(404);
     const empty = await buyer.agent.patch(`/api/suppliers/${id}`).set('x-csrf-token', buyer.token).send({});

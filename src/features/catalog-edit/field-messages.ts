@@ -1,0 +1,46 @@
+import { z } from 'zod';
+import { fieldErrorsOf } from '@/components/compat/field-errors';
+import { ApiError } from '@/lib/api-client';
+
+// A unique violation names its constraint (server/migrations/1764600100000-Catalog.ts).
+const CONFLICTS: Record<string, { field: string; message: string }> = {
+  brand_name_norm_key: { field: 'name', message: 'a brand by this name is already on file' },
+  part_brand_number_uq: { field: 'partNumber', message: 'this brand already has a part with this number' },
+  interchange_uq: { field: 'number', message: 'this number is already on file for this part' },
+};
+
+const conflictDetails = z.object({ constraint: z.string() });
+
+/**
+ * An API error's messages keyed by field, under an optional prefix ('plug' → 'reachMm'). Besides
+ * the 400's details, some refusals name their field only in the message ("supersededById: that
+ * would make a supersession loop") and a 409 names its unique constraint: both are placed too.
+ */
+export function fieldMessages(error: unknown, prefix = ''): Record<string, string> {
+  if (!(error instanceof ApiError)) return {};
+  const out = fieldErrorsOf(error, prefix);
+  if (Object.keys(out).length) return out;
+  if (error.status === 409) {
+    const parsed = conflictDetails.safeParse(error.details);
+    const known = parsed.success ? CONFLICTS[parsed.data.constraint] : undefined;
+    if (known) return prefix === '' ? { [known.field]: known.message } : {};
+  }
+  const named = /^([A-Za-z][\w.]*): (.+)$/.exec(error.message);
+  if (error.status === 400 && named) {
+    const [, field = '', message = ''] = named;
+    if (prefix === '') return { [field]: message };
+    if (field === prefix) return { '': message };
+    if (field.startsWith(`${prefix}.`)) return { [field.slice(prefix.length + 1)]: message };
+  }
+  return {};
+}
+
+/**
+ * The error's message when none of the form's own fields can carry it (a network failure, a 403,
+ * a refusal naming a field the form does not show), so no refusal goes unsaid.
+ */
+export function unplacedError(error: unknown, shown: Record<string, string>, fields: readonly string[]): Error | null {
+  if (!error) return null;
+  if (fields.some((f) => shown[f] !== undefined)) return null;
+  return error instanceof Error ? error : new Error(String(error));
+}

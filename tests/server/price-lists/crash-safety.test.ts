@@ -1,0 +1,173 @@
+import { spawn } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { PriceList, Supplier } from '../../../shared/schemas/price-list';
+import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
+import { newSupplier, post, stage, type Signed } from '../../helpers/price-list-api';
+import { isFullyCommitted, isUntouched, listState } from '../../helpers/price-list-checks';
+import { bulkCsv, bulkRows, runTag, seededRandom } from '../../helpers/price-list-files';
+import { createTestApp, signIn, type TestApp } from '../../helpers/test-app';
+
+const ROWS = 20_000;
+const KILLS = 20;
+const CHILD = fileURLToPath(new URL('../../helpers/price-list-crash-server.ts', import.meta.url));
+const ROOT = fileURLToPath(new URL('../../..', import.meta.url));
+
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+interface Child {
+  appName: string;
+  /** Resolves once the child has booted and signed in. */
+  ready: Promise<void>;
+  /** Hands the child the list to commit; resolves as it sends the request. */
+  commit(listId: string): Promise<void>;
+  /** Resolves when the commit answered (before the kill). */
+  answered: Promise<void>;
+  kill(): Promise<void>;
+}
+
+function startChild(email: string, appName: string): Child {
+  // One node process (no npx wrapper), leading its own process group, so SIGKILL reaches all of it.
+  const child = spawn(process.execPath, ['--import', 'tsx', CHILD], {
+    cwd: ROOT,
+    detached: true,
+    stdio: ['pipe', 'pipe', 'pipe'],
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      TSX_TSCONFIG_PATH: `${ROOT}/tsconfig.json`,
+      DATABASE_URL: inject('databaseUrl'),
+      SMTP_URL: inject('smtpUrl'),
+      MAIL_CATCHER_URL: inject('mailCatcherUrl'),
+      MEILI_HOST: inject('meiliHost'),
+      MEILI_API_KEY: inject('meiliApiKey'),
+      MEILI_INDEX: 'parts',
+      APP_URL: 'http://localhost:3999',
+      SESSION_SECRET: 'arcwise-test-secret-0123456789',
+      // node-postgres names its connections after this, so the test can see them go.
+      PGAPPNAME: appName,
+      CRASH_EMAIL: email,
+      CRASH_PASSWORD: TEST_PASSWORD,
+    },
+  });
+  let out = '';
+  let err = '';
+  const waiters: { word: string; resolve: () => void }[] = [];
+  const exited = new Promise<void>((resolve) => child.on('exit', () => resolve()));
+  const until = (word: string): Promise<void> =>
+    new Promise((resolve, reject) => {
+      if (out.includes(word)) return resolve();
+      waiters.push({ word, resolve });
+      void exited.then(() => reject(new Error(`crash child ${appName} ended before "${word}": ${err}`)));
+    });
+  child.stdout?.on('data', (d: Buffer) => {
+    out += d.toString();
+    for (const w of waiters) if (out.includes(w.word)) w.resolve();
+  });
+  child.stderr?.on('data', (d: Buffer) => (err += d.toString()));
+  const answered = until('done');
+  return {
+    appName,
+    ready: until('ready'),
+    commit(listId) {
+      child.stdin?.write(`${listId}\n`);
+      return until('committing');
+    },
+    answered,
+    async kill() {
+      process.kill(-(child.pid ?? 0), 'SIGKILL');
+      await exited;
+    },
+  };
+}
+
+describe('a server killed during a commit', () => {
+  let t: TestApp;
+  let buyer: Signed;
+  let email: string;
+  let supplier: Supplier;
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    const u = await makeUser(t.deps.dataSource, 'buyer');
+    email = u.email;
+    buyer = await signIn(t.app, u.email, TEST_PASSWORD);
+    supplier = await newSupplier(buyer, 'Crash');
+  });
+  afterAll(() => t.close());
+
+  async function backends(appName: string): Promise<number> {
+    const rows = (await t.deps.dataSource.query(`SELECT count(*)::int AS n FROM pg_stat_activity WHERE application_name = $1`, [
+      appName,
+    ])) as {
+      n: number;
+    }[];
+    return rows[0]?.n ?? 0;
+  }
+
+  /** PostgreSQL ends a dead client's transaction only when it next talks to it: wait for that. */
+  async function waitForBackendsGone(appName: string): Promise<void> {
+    const deadline = Date.now() + 30_000;
+    while ((await backends(appName)) > 0) {
+      if (Date.now() > deadline) throw new Error(`connections of ${appName} still open`);
+      await sleep(25);
+    }
+  }
+
+  it(`leaves each of ${KILLS} lists of ${ROWS.toLocaleString('en-US')} rows either committed whole or not at all`, async () => {
+    const ds = t.deps.dataSource;
+    const tag = runTag();
+    const random = seededRandom(5);
+    let version = 0;
+    const stageVersion = (): Promise<PriceList> => stage(buyer, { supplierId: supplier.id, file: bulkCsv(bulkRows(tag, ROWS, version++)) });
+
+    // The first list creates the parts; committed here, it also shows how long a commit takes.
+    let lastCommitted = await stageVersion();
+    const started = performance.now();
+    expect((await post(buyer, `/api/price-lists/${lastCommitted.id}/commit`)).status).toBe(200);
+    let commitMs = (performance.now() - started) * 1.5;
+
+    let current = await stageVersion();
+    const outcomes = { committed: 0, untouched: 0, connectionsSeen: 0 };
+    let next = startChild(email, `arcwise-crash-${tag}-0`);
+    for (let i = 0; i < KILLS; i++) {
+      const child = next;
+      await child.ready;
+      // The next server boots while this one commits, to keep the test short.
+      if (i + 1 < KILLS) next = startChild(email, `arcwise-crash-${tag}-${i + 1}`);
+      await child.commit(current.id);
+      const sentAt = performance.now();
+      if ((await backends(child.appName)) > 0) outcomes.connectionsSeen++;
+      let answeredAfter: number | null = null;
+      child.answered.then(
+        () => (answeredAfter = performance.now() - sentAt),
+        () => undefined,
+      );
+      await sleep(random() * commitMs);
+      await child.kill();
+      await waitForBackendsGone(child.appName);
+      // A commit that finished before the kill tells how long the next window should be.
+      if (answeredAfter !== null) commitMs = answeredAfter;
+
+      const state = await listState(ds, current.id);
+      if (state.status === 'committed') {
+        expect(isFullyCommitted(state), `kill ${i}: ${JSON.stringify(state)}`).toBe(true);
+        expect(state.pricesMatching).toBe(ROWS);
+        outcomes.committed++;
+        lastCommitted = current;
+        current = await stageVersion();
+      } else {
+        expect(isUntouched(state), `kill ${i}: ${JSON.stringify(state)}`).toBe(true);
+        // The supplier's prices are still those of the last list committed, every one of them.
+        const previous = await listState(ds, lastCommitted.id);
+        expect(previous.pricesFromList).toBe(ROWS);
+        expect(previous.pricesMatching).toBe(ROWS);
+        outcomes.untouched++;
+      }
+    }
+    console.log(`crash safety: ${KILLS} kills, ${outcomes.committed} commits whole, ${outcomes.untouched} not at all`);
+    // The kills landed inside commits (not all before, not all after), and the connection check was live.
+    expect(outcomes.untouched).toBeGreaterThan(0);
+    expect(outcomes.connectionsSeen).toBe(KILLS);
+  }, 150_000);
+});
