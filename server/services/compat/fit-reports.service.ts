@@ -125,7 +125,9 @@ export class FitReportService {
     const report = await this.get(user, id);
     const rows = report.result.checks.map((c) => `  ${c.verdict.toUpperCase().padEnd(6)} ${checkLabel(c.id)}: ${c.reason}`).join('\n');
     const htmlRows = report.result.checks
-      .map((c) => `<tr><td><b>${escapeHtml(c.verdict)}</b></td><td>${escapeHtml(checkLabel(c.id))}</td><td>${escapeHtml(c.reason)}</td></tr>`)
+      .map(
+        (c) => `<tr><td><b>${escapeHtml(c.verdict)}</b></td><td>${escapeHtml(checkLabel(c.id))}</td><td>${escapeHtml(c.reason)}</td></tr>`,
+      )
       .join('');
     await mailer.send({
       to,
