@@ -5,29 +5,26 @@
 import type { RequestHandler } from 'express';
 import { MeiliError } from './meili-error';
 
+/** The error to answer a request with, or null when its Authorization header lets it through. */
+export function authorizationError(apiKey: string | undefined, path: string, header: string | undefined): MeiliError | null {
+  if (!apiKey || path === '/health') return null;
+  if (!header) {
+    return new MeiliError(
+      401,
+      'missing_authorization_header',
+      'The Authorization header is missing. It must use the bearer authorization method.',
+      'auth',
+    );
+  }
+  const match = /^Bearer\s+(.+)$/i.exec(header);
+  if (!match || match[1] !== apiKey) return new MeiliError(403, 'invalid_api_key', 'The provided API key is invalid.', 'auth');
+  return null;
+}
+
 export function requireApiKey(apiKey: string | undefined): RequestHandler {
   return (req, _res, next) => {
-    if (!apiKey || req.path === '/health') {
-      next();
-      return;
-    }
-    const header = req.get('authorization');
-    if (!header) {
-      next(
-        new MeiliError(
-          401,
-          'missing_authorization_header',
-          'The Authorization header is missing. It must use the bearer authorization method.',
-          'auth',
-        ),
-      );
-      return;
-    }
-    const match = /^Bearer\s+(.+)$/i.exec(header);
-    if (!match || match[1] !== apiKey) {
-      next(new MeiliError(403, 'invalid_api_key', 'The provided API key is invalid.', 'auth'));
-      return;
-    }
-    next();
+    const error = authorizationError(apiKey, req.path, req.get('authorization'));
+    if (error) next(error);
+    else next();
   };
 }

@@ -73,3 +73,24 @@ export function listBits(bits: Bitset, out: Int32Array, limit = out.length): num
   }
   return n;
 }
+
+/** How many members `a` and `b` share. */
+export function countAnd(a: Bitset, b: Bitset): number {
+  const n = Math.min(a.length, b.length);
+  let count = 0;
+  for (let i = 0; i < n; i++) {
+    const word = (a[i] as number) & (b[i] as number);
+    if (word !== 0) count += popcount32(word);
+  }
+  return count;
+}
+
+/** The smallest member of both `a` and `b`, or -1. */
+export function firstOfAnd(a: Bitset, b: Bitset): number {
+  const n = Math.min(a.length, b.length);
+  for (let i = 0; i < n; i++) {
+    const word = (a[i] as number) & (b[i] as number);
+    if (word !== 0) return (i << 5) | (31 - Math.clz32(word & -word));
+  }
+  return -1;
+}

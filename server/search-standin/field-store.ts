@@ -10,7 +10,7 @@
  * in an Int32Array for the common single-valued field, an array otherwise) and whether the field
  * exists, is null, is empty. Values are read exactly as `fieldFacts` reads them.
  */
-import { clearBit, complementWithin, createBitset, resized, setBit, type Bitset } from './bitset';
+import { clearBit, complementWithin, createBitset, resized, setBit, wordsFor, type Bitset } from './bitset';
 import type { DocumentRecord } from './document-record';
 import { isJsonObject, NUMERIC_STRING, valuesAtPath, type JsonObject } from './field-paths';
 import { foldFacetValue } from './text-tokens';
@@ -24,6 +24,8 @@ const IS_NULL = 2;
 const IS_EMPTY = 4;
 
 const INITIAL_CAPACITY = 1024;
+/** Columns with more distinct values than this get no per-value bitsets (facets walk documents). */
+const MAX_GROUP_BITSETS = 64;
 
 export class FieldColumn {
   /** Per code. */
@@ -38,6 +40,13 @@ export class FieldColumn {
   /** Per group. */
   readonly groupIsNumber: boolean[] = [];
   readonly groupNumber: number[] = [];
+  /** The group's first code, and how many spellings (codes) it has. */
+  readonly groupFirstCode: number[] = [];
+  readonly groupSpellings: number[] = [];
+  /** Groups spelled more than one way ("Orvane", "orvane"). */
+  private multiSpelled = 0;
+  /** Per group, its documents; built on demand, dropped by any change. */
+  private groupBits: Bitset[] | null = null;
   private readonly spellingCodes = new Map<string, number>();
   private readonly numberCodes = new Map<number, number>();
   private readonly stringGroups = new Map<string, number>();
@@ -74,7 +83,8 @@ export class FieldColumn {
     this.flags = flags;
   }
 
-  private groupOf(isNumber: boolean, folded: string, number: number): number {
+  /** The group of a new code (numbered `code`). */
+  private groupOf(isNumber: boolean, folded: string, number: number, code: number): number {
     const groups = isNumber ? this.numberGroups : this.stringGroups;
     const key = isNumber ? number : folded;
     let group = (groups as Map<string | number, number>).get(key);
@@ -83,8 +93,38 @@ export class FieldColumn {
       (groups as Map<string | number, number>).set(key, group);
       this.groupIsNumber.push(isNumber);
       this.groupNumber.push(number);
+      this.groupFirstCode.push(code);
+      this.groupSpellings.push(1);
+    } else {
+      this.groupSpellings[group] = (this.groupSpellings[group] as number) + 1;
+      if (this.groupSpellings[group] === 2) this.multiSpelled++;
     }
     return group;
+  }
+
+  /** True when every group has one spelling, so a group's label does not depend on which document came first. */
+  get singleSpelled(): boolean {
+    return this.multiSpelled === 0;
+  }
+
+  /**
+   * Per group, the documents holding it, or null when the column has too many groups for that to
+   * pay. Counting a facet is then one AND-and-popcount per value instead of a read per document.
+   */
+  groupBitsets(capacity: number): Bitset[] | null {
+    if (this.groupCount > MAX_GROUP_BITSETS) return null;
+    if (this.groupBits && (this.groupBits[0]?.length ?? wordsFor(capacity)) === wordsFor(capacity) && this.groupBits.length === this.groupCount) {
+      return this.groupBits;
+    }
+    const bits = Array.from({ length: this.groupCount }, () => createBitset(capacity));
+    const end = Math.min(capacity, this.single.length);
+    for (let seq = 0; seq < end; seq++) {
+      const code = this.single[seq] as number;
+      if (code >= 0) setBit(bits[this.codeGroup[code] as number] as Bitset, seq);
+      else if (code === MANY_VALUES) for (const each of this.many[seq] as Int32Array) setBit(bits[this.codeGroup[each] as number] as Bitset, seq);
+    }
+    this.groupBits = bits;
+    return bits;
   }
 
   private stringCode(spelling: string): number {
@@ -99,7 +139,7 @@ export class FieldColumn {
       this.codeFolded.push(folded);
       this.codeLabel.push(spelling);
       this.codeNumber.push(number);
-      this.codeGroup.push(this.groupOf(false, folded, number));
+      this.codeGroup.push(this.groupOf(false, folded, number, code));
     }
     return code;
   }
@@ -113,7 +153,7 @@ export class FieldColumn {
       this.codeFolded.push('');
       this.codeLabel.push(String(value));
       this.codeNumber.push(value);
-      this.codeGroup.push(this.groupOf(true, '', value));
+      this.codeGroup.push(this.groupOf(true, '', value, code));
     }
     return code;
   }
@@ -131,6 +171,7 @@ export class FieldColumn {
   }
 
   setDocument(seq: number, doc: JsonObject): void {
+    this.groupBits = null;
     const values = valuesAtPath(doc, this.path);
     let flags = values.length > 0 ? EXISTS : 0;
     const strings: number[] = [];
@@ -173,6 +214,7 @@ export class FieldColumn {
 
   clearDocument(seq: number): void {
     if (seq >= this.single.length) return;
+    this.groupBits = null;
     this.single[seq] = NO_VALUE;
     this.many[seq] = undefined;
     this.flags[seq] = 0;

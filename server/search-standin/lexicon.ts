@@ -5,10 +5,15 @@
  * numbers; a sorted range is a binary search and a slice.
  *
  * The trie is flat: nodes in preorder (so in sorted order), each a letter, the index of the word
- * ending there (or -1) and the end of its subtree, in typed arrays built from the sorted array the
- * first time a fuzzy lookup follows a publish(). It finds the same words as minisearch's radix-tree
- * fuzzyGet, which this replaces: that walk's Map iterators and string building cost ~2.5 ms for a
- * two-typo part number among 600,000 words; over the flat trie it is a fraction of that.
+ * ending there (or -1) and the end of its subtree, interleaved in one Int32Array built from the
+ * sorted array the first time a fuzzy lookup follows a publish(). It finds the same words as
+ * minisearch's radix-tree fuzzyGet, which this replaces: that walk's Map iterators and string
+ * building cost ~2.5 ms for a two-typo part number among 600,000 words; over the flat trie it is a
+ * fraction of that.
+ *
+ * Lookups report words by their index in the sorted array (`words`, `lists`): a fuzzy lookup
+ * meets hundreds of words, and touching each word's string and list object was most of its cost.
+ * Indexes hold until the next publish().
  *
  * Words are never removed: a word whose documents are all gone keeps an empty list, which is
  * reused if the word comes back, so the views never disagree.
@@ -25,6 +30,32 @@ export class Lexicon {
 
   get(word: string): PostingList | undefined {
     return this.byWord.get(word);
+  }
+
+  /** Published words, sorted; the array is replaced (not changed) by publish(). */
+  get words(): readonly string[] {
+    return this.sortedWords;
+  }
+
+  get lists(): readonly PostingList[] {
+    return this.sortedLists;
+  }
+
+  /** The index of a published word, or -1. */
+  indexOf(word: string): number {
+    const low = this.lowerBound(word);
+    return this.sortedWords[low] === word ? low : -1;
+  }
+
+  private lowerBound(word: string): number {
+    let low = 0;
+    let high = this.sortedWords.length;
+    while (low < high) {
+      const middle = (low + high) >>> 1;
+      if ((this.sortedWords[middle] as string) < word) low = middle + 1;
+      else high = middle;
+    }
+    return low;
   }
 
   /** The word's list, created if new; call publish() after a batch of additions. */
@@ -72,19 +103,12 @@ export class Lexicon {
     return this.trie;
   }
 
-  /** Calls `visit` for every word starting with `prefix`, in sorted order. */
-  forEachWithPrefix(prefix: string, visit: (word: string, list: PostingList) => void): void {
-    let low = 0;
-    let high = this.sortedWords.length;
-    while (low < high) {
-      const middle = (low + high) >>> 1;
-      if ((this.sortedWords[middle] as string) < prefix) low = middle + 1;
-      else high = middle;
-    }
-    for (let i = low; i < this.sortedWords.length; i++) {
-      const word = this.sortedWords[i] as string;
-      if (!word.startsWith(prefix)) break;
-      visit(word, this.sortedLists[i] as PostingList);
+  /** Calls `visit` with the index of every word starting with `prefix`, in sorted order. */
+  forEachWithPrefix(prefix: string, visit: (index: number) => void): void {
+    const words = this.sortedWords;
+    for (let i = this.lowerBound(prefix); i < words.length; i++) {
+      if (!(words[i] as string).startsWith(prefix)) break;
+      visit(i);
     }
   }
 
@@ -92,11 +116,9 @@ export class Lexicon {
    * Words within `distance` Levenshtein edits of `word` (plain Levenshtein, as minisearch's
    * fuzzyGet counts), in sorted order.
    */
-  forEachNear(word: string, distance: number, visit: (word: string, list: PostingList) => void): void {
+  forEachNear(word: string, distance: number, visit: (index: number) => void): void {
     if (this.sortedWords.length === 0) return;
-    const { letters, wordAt, subtreeEnd } = this.flatTrie();
-    const words = this.sortedWords;
-    const lists = this.sortedLists;
+    const nodes = this.flatTrie();
     const columns = word.length + 1;
     const maxLength = word.length + distance;
     // Row r holds the distances between the first r letters of a candidate and every prefix of
@@ -105,17 +127,17 @@ export class Lexicon {
     const query = codesOf(word);
 
     const walk = (node: number, depth: number): void => {
-      const found = wordAt[node] as number;
-      if (found >= 0 && (matrix[depth * columns + columns - 1] as number) <= distance) visit(words[found] as string, lists[found] as PostingList);
+      const found = nodes[node * 3 + WORD] as number;
+      if (found >= 0 && (matrix[depth * columns + columns - 1] as number) <= distance) visit(found);
       if (depth >= maxLength) return;
       const row = depth + 1;
       const rowOffset = row * columns;
       const previousOffset = rowOffset - columns;
       const first = Math.max(0, row - distance - 1);
       const last = Math.min(columns - 1, row + distance);
-      const stop = subtreeEnd[node] as number;
-      for (let child = node + 1; child < stop; child = subtreeEnd[child] as number) {
-        const letter = letters[child] as number;
+      const stop = nodes[node * 3 + END] as number;
+      for (let child = node + 1; child < stop; child = nodes[child * 3 + END] as number) {
+        const letter = nodes[child * 3] as number;
         let best = matrix[rowOffset] as number;
         for (let c = first; c < last; c++) {
           const substitution = (matrix[previousOffset + c] as number) + (letter === query[c] ? 0 : 1);
@@ -146,12 +168,10 @@ export class Lexicon {
     term: string,
     budget: number,
     asPrefix: boolean,
-    visit: (word: string, list: PostingList, typos: number) => void,
+    visit: (index: number, typos: number) => void,
   ): void {
     if (this.sortedWords.length === 0 || budget <= 0 || term.length === 0) return;
-    const { letters, wordAt, subtreeEnd } = this.flatTrie();
-    const words = this.sortedWords;
-    const lists = this.sortedLists;
+    const nodes = this.flatTrie();
     const maxLength = center.length + centerDistance;
     // Levenshtein to `center`, banded by centerDistance, as in forEachNear.
     const levColumns = center.length + 1;
@@ -171,11 +191,11 @@ export class Lexicon {
     bestPrefix[0] = osa[lastOsa] as number;
 
     const walk = (node: number, depth: number): void => {
-      const found = wordAt[node] as number;
+      const found = nodes[node * 3 + WORD] as number;
       if (found >= 0 && depth > 0 && (lev[depth * levColumns + levColumns - 1] as number) <= centerDistance) {
         const distance = asPrefix ? (bestPrefix[depth] as number) : (osa[depth * osaColumns + lastOsa] as number);
         const typos = path[0] === firstLetter ? distance : distance + 1;
-        if (distance !== 0 && typos <= budget) visit(words[found] as string, lists[found] as PostingList, typos);
+        if (distance !== 0 && typos <= budget) visit(found, typos);
       }
       if (depth >= maxLength) return;
       const row = depth + 1;
@@ -189,9 +209,9 @@ export class Lexicon {
       const osaFirst = Math.max(0, row - budget - 1);
       const osaLast = Math.min(osaColumns - 1, row + budget);
       const letterBefore = depth > 0 ? (path[depth - 1] as number) : -1;
-      const stop = subtreeEnd[node] as number;
-      for (let child = node + 1; child < stop; child = subtreeEnd[child] as number) {
-        const letter = letters[child] as number;
+      const stop = nodes[node * 3 + END] as number;
+      for (let child = node + 1; child < stop; child = nodes[child * 3 + END] as number) {
+        const letter = nodes[child * 3] as number;
         let levBest = lev[levRow] as number;
         for (let c = levFirst; c < levLast; c++) {
           const substitution = (lev[levPrevious + c] as number) + (letter === centerCodes[c] ? 0 : 1);
@@ -239,14 +259,15 @@ export class Lexicon {
   }
 }
 
-interface FlatTrie {
-  /** Per node, in preorder: its letter (UTF-16 code unit), the index of the word ending there or -1, and one past its subtree. */
-  letters: Uint16Array;
-  wordAt: Int32Array;
-  subtreeEnd: Int32Array;
-}
+/**
+ * Per node, in preorder, three Int32 slots: its letter (a UTF-16 code unit), the index of the word
+ * ending there or -1, and one past its subtree. Node 0 is the root; a node's first child, if any,
+ * is the next node.
+ */
+type FlatTrie = Int32Array;
+const WORD = 1;
+const END = 2;
 
-/** Node 0 is the root; a node's first child, if any, is the next node. */
 function buildTrie(words: readonly string[]): FlatTrie {
   let size = 1;
   let previous = '';
@@ -254,26 +275,26 @@ function buildTrie(words: readonly string[]): FlatTrie {
     size += word.length - commonPrefixLength(previous, word);
     previous = word;
   }
-  const letters = new Uint16Array(size);
-  const wordAt = new Int32Array(size).fill(-1);
-  const subtreeEnd = new Int32Array(size);
+  const nodes = new Int32Array(size * 3);
+  nodes[WORD] = -1;
   // Open nodes by depth: stack[d] is the node at depth d on the current path.
   const stack: number[] = [0];
   let next = 1;
   previous = '';
   words.forEach((word, index) => {
     const shared = commonPrefixLength(previous, word);
-    while (stack.length > shared + 1) subtreeEnd[stack.pop() as number] = next;
+    while (stack.length > shared + 1) nodes[(stack.pop() as number) * 3 + END] = next;
     for (let d = shared; d < word.length; d++) {
-      letters[next] = word.charCodeAt(d);
+      nodes[next * 3] = word.charCodeAt(d);
+      nodes[next * 3 + WORD] = -1;
       stack.push(next);
       next++;
     }
-    wordAt[stack[stack.length - 1] as number] = index;
+    nodes[(stack[stack.length - 1] as number) * 3 + WORD] = index;
     previous = word;
   });
-  while (stack.length > 0) subtreeEnd[stack.pop() as number] = next;
-  return { letters, wordAt, subtreeEnd };
+  while (stack.length > 0) nodes[(stack.pop() as number) * 3 + END] = next;
+  return nodes;
 }
 
 function commonPrefixLength(a: string, b: string): number {

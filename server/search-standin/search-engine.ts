@@ -7,10 +7,10 @@
  * the page is picked by a bounded heap over packed ranking keys: RankedCandidate objects are only
  * made for the hits returned, unless sorting or distinct needs them for every candidate.
  */
-import { countBits, hasBit, listBits, type Bitset } from './bitset';
+import { countBits, createBitset, hasBit, listBits, setBit, type Bitset } from './bitset';
 import { factsOf, type DocumentRecord } from './document-record';
 import { matchesAttributePattern, pickAttributes, type JsonObject } from './field-paths';
-import { computeFacets, resolveFacetNames, type FacetResult } from './facets';
+import { computeFacets, resolveFacetNames, type FacetDocuments, type FacetResult } from './facets';
 import { compileBitsetFilter, type BitsetFilter } from './filter-bitsets';
 import { formatHit, type MatchedWords } from './highlight';
 import { isFilterableAttribute } from './index-settings';
@@ -28,7 +28,7 @@ import {
 } from './ranking';
 import { DEFAULT_SEARCH_LIMIT, type SearchRequest } from './search-request';
 import type { StandinIndex } from './standin-index';
-import type { TermMatches } from './text-index';
+import { matchedWordsOf, type TermMatches } from './text-index';
 import { MAX_QUERY_WORDS, tokenize } from './text-tokens';
 import { typoBudget } from './typo-distance';
 
@@ -48,17 +48,38 @@ interface TextCandidates {
   attributeRank: Uint8Array;
   exactWords: Uint8Array;
   score: Float64Array;
-  /** What every term matched, for highlighting. */
-  matchedWords: MatchedWords;
+  /** The same documents as a bitset, when facets are asked for. */
+  bits: Bitset | null;
+  /** What every term matched, when highlighting is asked for. */
+  matchedWords: MatchedWords | null;
 }
 
 const ENDS_WITH_SEPARATOR = /[^\p{L}\p{N}]$/u;
+
+/**
+ * Per-search typed arrays as large as the result set, reused from one search to the next (a
+ * search runs start to end without yielding): allocating a megabyte of them per query kept the
+ * garbage collector busy.
+ */
+const scratchArrays = new Map<string, Int32Array | Uint8Array | Float64Array>();
+
+function scratch<A extends Int32Array | Uint8Array | Float64Array>(name: string, length: number, make: (size: number) => A): A {
+  const held = scratchArrays.get(name) as A | undefined;
+  if (held && held.length >= length) return held;
+  const created = make(Math.max(length, 1024, 2 * (held?.length ?? 0)));
+  scratchArrays.set(name, created);
+  return created;
+}
+
+const int32s = (size: number): Int32Array => new Int32Array(size);
+const uint8s = (size: number): Uint8Array => new Uint8Array(size);
+const float64s = (size: number): Float64Array => new Float64Array(size);
 
 function placeholderCandidate(record: DocumentRecord): RankedCandidate {
   return { record, level: 0, typos: 0, attributeRank: 0, exactWords: 0, score: 0 };
 }
 
-function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[], filterBits: Bitset | null): TextCandidates {
+function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[], filterBits: Bitset | null, wantBits: boolean): TextCandidates {
   const settings = index.resolved;
   const text = index.text();
   const budgetRules = {
@@ -101,15 +122,17 @@ function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[]
   const capacity = driver.count;
   const found: TextCandidates = {
     count: 0,
-    slots: new Int32Array(capacity),
-    seqs: new Int32Array(capacity),
-    level: new Uint8Array(capacity),
-    typos: new Uint8Array(capacity),
-    attributeRank: new Uint8Array(capacity),
-    exactWords: new Uint8Array(capacity),
-    score: new Float64Array(capacity),
-    matchedWords: { words: new Set(), prefixes: [] },
+    slots: scratch('slots', capacity, int32s),
+    seqs: scratch('seqs', capacity, int32s),
+    level: scratch('level', capacity, uint8s),
+    typos: scratch('typos', capacity, uint8s),
+    attributeRank: scratch('attributeRank', capacity, uint8s),
+    exactWords: scratch('exactWords', capacity, uint8s),
+    score: scratch('score', capacity, float64s),
+    bits: wantBits ? createBitset(index.fieldStore.size) : null,
+    matchedWords: null,
   };
+  const foundBits = found.bits;
   // The other terms are joined through slot -> entry maps; the driver is walked directly.
   const others = order.slice(1).map((i) => matches[i] as TermMatches);
   text.withEntryMaps(others, (maps) => {
@@ -119,10 +142,11 @@ function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[]
       mapByTerm[termIndex] = maps[k] as Int32Array;
     });
     const driverIndex = order[0] as number;
+    const seqOfSlot = text.slotSeqs;
     for (let i = 0; i < driver.count; i++) {
       const slot = driver.slots[i] as number;
-      const record = text.recordAt(slot);
-      if (!record || (filterBits && !hasBit(filterBits, record.seq))) continue;
+      const seq = seqOfSlot[slot] as number;
+      if (seq < 0 || (filterBits && !hasBit(filterBits, seq))) continue;
       let level = 1;
       let typos = driver.typos[i] as number;
       let attributeRank = driver.attributeRank[i] as number;
@@ -149,7 +173,8 @@ function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[]
       }
       const n = found.count++;
       found.slots[n] = slot;
-      found.seqs[n] = record.seq;
+      found.seqs[n] = seq;
+      if (foundBits) setBit(foundBits, seq);
       found.level[n] = level;
       found.typos[n] = typos;
       found.attributeRank[n] = attributeRank;
@@ -157,13 +182,12 @@ function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[]
       found.score[n] = score;
     }
   });
-  const words = new Set<string>();
-  const prefixes: string[] = [];
-  for (const match of matches) {
-    for (const word of match.words) words.add(word);
-    if (match.prefix !== null) prefixes.push(match.prefix);
+  // Matched words are only spelled out for highlighting: a fuzzy term meets hundreds of words.
+  if (request.formattedAttributes && request.highlightAttributes) {
+    const prefixes: string[] = [];
+    for (const match of matches) if (match.prefix !== null) prefixes.push(match.prefix);
+    found.matchedWords = { words: matchedWordsOf(matches), prefixes };
   }
-  found.matchedWords = { words, prefixes };
   return found;
 }
 
@@ -222,8 +246,25 @@ interface SearchPlan {
   window: Window;
 }
 
-function facetsOver(index: StandinIndex, facetNames: string[] | null, seqs: Int32Array, count: number): FacetResult | null {
-  return facetNames ? computeFacets(index.fieldStore, seqs, count, facetNames, index.resolved) : null;
+function facetsOver(index: StandinIndex, facetNames: string[] | null, documents: FacetDocuments): FacetResult | null {
+  return facetNames ? computeFacets(index.fieldStore, documents, facetNames, index.resolved) : null;
+}
+
+/** The documents of a bitset, ascending, listed only if a facet needs them listed. */
+function documentsOfBits(bits: Bitset, total: number): FacetDocuments {
+  let listed: Int32Array | null = null;
+  return {
+    count: total,
+    bits,
+    ascending: true,
+    list: () => {
+      if (!listed) {
+        listed = scratch('seqs', total, int32s);
+        listBits(bits, listed, total);
+      }
+      return listed;
+    },
+  };
 }
 
 /**
@@ -253,11 +294,7 @@ function rankPlaceholder({ index, request, filter, facetNames, compare, window }
       if (ranked.length >= window.end) break;
     }
   }
-  let facets: FacetResult | null = null;
-  if (facetNames) {
-    const seqs = new Int32Array(total);
-    facets = facetsOver(index, facetNames, seqs, listBits(bits, seqs));
-  }
+  const facets = facetsOver(index, facetNames, documentsOfBits(bits, total));
   return { ranked, total, facets, matchedWords: null };
 }
 
@@ -270,17 +307,17 @@ function rankCandidates({ index, terms, request, filter, facetNames, distinct, c
   let facets: FacetResult | null;
   if (terms.length === 0) {
     const live = bits ?? store.live;
-    const seqs = new Int32Array(countBits(live));
-    const count = listBits(live, seqs);
+    const documents = documentsOfBits(live, countBits(live));
+    const seqs = documents.list();
     all = [];
-    for (let i = 0; i < count; i++) all.push(placeholderCandidate(index.bySeq.get(seqs[i] as number) as DocumentRecord));
-    facets = facetsOver(index, facetNames, seqs, count);
+    for (let i = 0; i < documents.count; i++) all.push(placeholderCandidate(index.bySeq.get(seqs[i] as number) as DocumentRecord));
+    facets = facetsOver(index, facetNames, documents);
   } else {
-    const found = matchTerms(index, request, terms, bits);
+    const found = matchTerms(index, request, terms, bits, facetNames !== null && facetNames.length > 0);
     matchedWords = found.matchedWords;
-    facets = facetsOver(index, facetNames, found.seqs, found.count);
+    facets = facetsOver(index, facetNames, { count: found.count, list: () => found.seqs, bits: found.bits, ascending: false });
     if (packed && !distinct) {
-      const keys = new Int32Array(found.count);
+      const keys = scratch('keys', found.count, int32s);
       for (let i = 0; i < found.count; i++) {
         keys[i] = packRank(
           packed,

@@ -4,6 +4,7 @@
  */
 import { createServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { searchFastPath } from './search-fast-path';
 import { createStandinApp } from './standin-app';
 import { createStandinState, type StandinState } from './standin-state';
 
@@ -26,7 +27,12 @@ export interface RunningSearchStandin {
 export async function startSearchStandin(options: SearchStandinOptions = {}): Promise<RunningSearchStandin> {
   const host = options.host ?? '127.0.0.1';
   const state: StandinState = createStandinState();
-  const server = createServer(createStandinApp(state, options.apiKey));
+  const app = createStandinApp(state, options.apiKey);
+  // Searches, the hot path, skip Express; everything else (and any unusual search) goes to it.
+  const fastSearch = searchFastPath(state, options.apiKey);
+  const server = createServer((req, res) => {
+    if (!fastSearch(req, res)) app(req, res);
+  });
   // The SDK keeps connections alive between polls; a short timeout lets close() finish promptly.
   server.keepAliveTimeout = 5_000;
 

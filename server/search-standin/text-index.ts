@@ -32,10 +32,23 @@ export interface TermMatches {
   attributeRank: Uint8Array;
   /** BM25 of the best matching word, weighted down for prefix and typo matches. */
   score: Float64Array;
-  /** Accepted whole-word matches (exact or with typos), for highlighting. */
-  words: Set<string>;
+  /** Accepted whole-word matches (exact or with typos), for highlighting: indexes into `wordList`. */
+  wordIndexes: number[];
+  wordList: readonly string[];
   /** The term when it matched as a prefix: words starting with it are highlighted up to its length. */
   prefix: string | null;
+}
+
+/**
+ * Every word's live postings in one place, words in sorted order: word i's entries are
+ * [start[i], start[i + 1]). Built from the per-word lists on the first lookup after a write, so a
+ * lookup reads contiguous memory and needs no liveness checks, and neighbouring words (part
+ * numbers one digit apart) are neighbours in memory.
+ */
+interface PackedPostings {
+  start: Int32Array;
+  slots: Int32Array;
+  infos: Int32Array;
 }
 
 export interface TermQuery {
@@ -85,12 +98,15 @@ export class TextIndex {
   private readonly words = new Lexicon();
   /** Slots are the text index's own document numbers: a rewritten document gets a new one. */
   private readonly recordBySlot: Array<DocumentRecord | undefined> = [];
+  /** The document number (`seq`) of each live slot, -1 for a dead one: joins read it, not the record. */
+  private seqBySlot = new Int32Array(1024);
   private readonly lengthBySlot: number[] = [];
   private readonly slotBySeq = new Map<number, number>();
   private readonly typoDisabledMask: number;
   private totalLength = 0;
   private readonly isLive = (slot: number): boolean => this.recordBySlot[slot] !== undefined;
   private readonly termCache = new Map<string, TermMatches>();
+  private packed: PackedPostings | null = null;
   private cachedEntries = 0;
   /** Slot -> entry index, -1 elsewhere: one while a term is collected, more while terms are joined. */
   private readonly scratch: Int32Array[] = [];
@@ -135,6 +151,12 @@ export class TextIndex {
       this.discard(record.seq);
       const slot = this.recordBySlot.length;
       this.recordBySlot.push(record);
+      if (slot >= this.seqBySlot.length) {
+        const grown = new Int32Array(this.seqBySlot.length * 2);
+        grown.set(this.seqBySlot);
+        this.seqBySlot = grown;
+      }
+      this.seqBySlot[slot] = record.seq;
       this.slotBySeq.set(record.seq, slot);
       perWord.clear();
       length = 0;
@@ -159,6 +181,7 @@ export class TextIndex {
     this.forgetTerms();
     this.slotBySeq.delete(seq);
     this.recordBySlot[slot] = undefined;
+    this.seqBySlot[slot] = -1;
     this.totalLength -= this.lengthBySlot[slot] ?? 0;
   }
 
@@ -166,11 +189,46 @@ export class TextIndex {
     return this.recordBySlot[slot];
   }
 
+  /** Document number of every slot (-1 for dead ones), indexed by slot; changes with writes. */
+  get slotSeqs(): Int32Array {
+    return this.seqBySlot;
+  }
+
   /** Scores depend on the document count and lengths: any write drops every cached term. */
   private forgetTerms(): void {
+    this.packed = null;
     if (this.termCache.size === 0) return;
     this.termCache.clear();
     this.cachedEntries = 0;
+  }
+
+  private packedPostings(): PackedPostings {
+    if (this.packed) return this.packed;
+    const lists = this.words.lists;
+    let total = 0;
+    for (const list of lists) {
+      let stale = 0;
+      for (const slot of list.slots) if (this.recordBySlot[slot] === undefined) stale++;
+      // Lists left mostly stale by rewrites are compacted in place, as reads used to.
+      total += stale > 0 ? compactIfStale(list, this.isLive, stale) : list.slots.length;
+    }
+    const start = new Int32Array(lists.length + 1);
+    const slots = new Int32Array(total);
+    const infos = new Int32Array(total);
+    let at = 0;
+    lists.forEach((list, k) => {
+      start[k] = at;
+      for (let i = 0; i < list.slots.length; i++) {
+        const slot = list.slots[i] as number;
+        if (this.recordBySlot[slot] === undefined) continue;
+        slots[at] = slot;
+        infos[at] = list.infos[i] as number;
+        at++;
+      }
+    });
+    start[lists.length] = at;
+    this.packed = { start, slots, infos };
+    return this.packed;
   }
 
   /** Scratch slot maps, each all -1 and at least as long as the slot count. */
@@ -230,6 +288,9 @@ export class TextIndex {
 
   private lookUpTerm(query: TermQuery, allowedMask: number): TermMatches {
     const { term, asPrefix, budget } = query;
+    const lexicon = this.words;
+    const wordList = lexicon.words;
+    const { start, slots, infos } = this.packedPostings();
     let capacity = INITIAL_MATCH_CAPACITY;
     const matches: TermMatches = {
       count: 0,
@@ -238,7 +299,8 @@ export class TextIndex {
       exact: new Uint8Array(capacity),
       attributeRank: new Uint8Array(capacity),
       score: new Float64Array(capacity),
-      words: new Set(),
+      wordIndexes: [],
+      wordList,
       prefix: asPrefix ? term : null,
     };
     const grow = (): void => {
@@ -254,28 +316,28 @@ export class TextIndex {
       matches.attributeRank = grown(matches.attributeRank, (size) => new Uint8Array(size));
       matches.score = grown(matches.score, (size) => new Float64Array(size));
     };
-    const entryOf = (this.scratchMaps(1)[0] as Int32Array);
+    const entryOf = this.scratchMaps(1)[0] as Int32Array;
     const documentCount = Math.max(1, this.slotBySeq.size);
     const averageLength = this.totalLength / documentCount || 1;
+    const lengthBySlot = this.lengthBySlot;
+    const typoDisabledMask = this.typoDisabledMask;
 
-    const collect = (word: string, list: PostingList, derivation: Derivation): void => {
-      let stale = 0;
+    /** Adds the documents of word `index` (postings are all live). */
+    const collect = (index: number, derivation: Derivation): void => {
+      const from = start[index] as number;
+      const to = start[index + 1] as number;
+      const documents = to - from;
       let matchedAny = false;
-      const { slots, infos } = list;
-      const idf = Math.log(1 + (documentCount - slots.length + 0.5) / (slots.length + 0.5));
-      const typoMask = derivation.typos > 0 ? ~this.typoDisabledMask : -1;
-      for (let i = 0; i < slots.length; i++) {
-        const slot = slots[i] as number;
-        if (this.recordBySlot[slot] === undefined) {
-          stale++;
-          continue;
-        }
-        const info = infos[i] as number;
+      const idf = Math.log(1 + (documentCount - documents + 0.5) / (documents + 0.5));
+      const typoMask = derivation.typos > 0 ? ~typoDisabledMask : -1;
+      for (let p = from; p < to; p++) {
+        const slot = slots[p] as number;
+        const info = infos[p] as number;
         const mask = fieldMaskOf(info) & allowedMask & typoMask;
         if (mask === 0) continue;
         matchedAny = true;
         const frequency = frequencyOf(info);
-        const lengthRatio = (this.lengthBySlot[slot] as number) / averageLength;
+        const lengthRatio = (lengthBySlot[slot] as number) / averageLength;
         const score = (derivation.weight * idf * frequency * (BM25_K1 + 1)) / (frequency + BM25_K1 * (1 - BM25_B + BM25_B * lengthRatio));
         const rank = bestFieldRank(mask);
         const entry = entryOf[slot] as number;
@@ -296,17 +358,17 @@ export class TextIndex {
         }
       }
       // Prefix matches are many (a short prefix can match 100,000 words) and highlight by `prefix`.
-      if (matchedAny && !derivation.prefix) matches.words.add(word);
-      if (stale > 0) compactIfStale(list, this.isLive, stale);
+      if (matchedAny && !derivation.prefix) matches.wordIndexes.push(index);
     };
 
     // A word starting with the term is found by the prefix lookup; other words may be proposed by
     // several typo lookups, hence the set. `primary` marks the lookup of the term itself.
-    const seenTypoWords = new Set<string>();
+    const seenTypoWords = new Set<number>();
     const prefixDerivations = new Map<number, Derivation>();
-    const consider = (word: string, list: PostingList, primary: boolean): void => {
+    const consider = (index: number, primary: boolean): void => {
+      const word = wordList[index] as string;
       if (word === term) {
-        if (primary) collect(word, list, { typos: 0, exact: true, prefix: false, weight: 1 });
+        if (primary) collect(index, { typos: 0, exact: true, prefix: false, weight: 1 });
         return;
       }
       if (asPrefix && word.startsWith(term)) {
@@ -317,40 +379,46 @@ export class TextIndex {
           derivation = { typos: 0, exact: false, prefix: true, weight };
           prefixDerivations.set(word.length, derivation);
         }
-        collect(word, list, derivation);
+        collect(index, derivation);
         return;
       }
-      if (seenTypoWords.has(word)) return;
-      seenTypoWords.add(word);
+      if (seenTypoWords.has(index)) return;
+      seenTypoWords.add(index);
       const typos = typosBetween(term, word, budget, asPrefix);
-      if (typos !== null) collect(word, list, { typos, exact: false, prefix: false, weight: TYPO_WEIGHT / typos });
+      if (typos !== null) collect(index, { typos, exact: false, prefix: false, weight: TYPO_WEIGHT / typos });
     };
 
-    const primary = (word: string, list: PostingList): void => consider(word, list, true);
-    const secondary = (word: string, list: PostingList): void => consider(word, list, false);
-    // Fuzzy lookups hand over only words the typo rule accepts, with their typos: what consider()
-    // would do with each proposal, without re-checking the rejected ones.
-    const accepted = (word: string, list: PostingList, typos: number): void => {
-      if (word === term || (asPrefix && word.startsWith(term)) || seenTypoWords.has(word)) return;
-      seenTypoWords.add(word);
-      collect(word, list, { typos, exact: false, prefix: false, weight: TYPO_WEIGHT / typos });
+    const primary = (index: number): void => consider(index, true);
+    const secondary = (index: number): void => consider(index, false);
+    // The term's own fuzzy lookup hands over only words the typo rule accepts, with their typos:
+    // what consider() does with each proposal, without reading the rejected ones. Accepted words
+    // are neither the term nor (in prefix mode) start with it, and come first and once each.
+    const typoDerivations: Derivation[] = [];
+    const accepted = (index: number, typos: number): void => {
+      seenTypoWords.add(index);
+      let derivation = typoDerivations[typos];
+      if (!derivation) {
+        derivation = { typos, exact: false, prefix: false, weight: TYPO_WEIGHT / typos };
+        typoDerivations[typos] = derivation;
+      }
+      collect(index, derivation);
     };
     try {
-      if (asPrefix) this.words.forEachWithPrefix(term, primary);
+      if (asPrefix) lexicon.forEachWithPrefix(term, primary);
       else {
-        const exact = this.words.get(term);
-        if (exact) primary(term, exact);
+        const exact = lexicon.indexOf(term);
+        if (exact >= 0) primary(exact);
       }
       if (budget > 0) {
-        this.words.forEachTypoMatch(term, budget, term, budget, asPrefix, accepted);
+        lexicon.forEachTypoMatch(term, budget, term, budget, asPrefix, accepted);
         for (const variant of adjacentTranspositions(term)) {
-          if (asPrefix) this.words.forEachWithPrefix(variant, secondary);
+          if (asPrefix) lexicon.forEachWithPrefix(variant, secondary);
           else {
-            const exact = this.words.get(variant);
-            if (exact) secondary(variant, exact);
+            const exact = lexicon.indexOf(variant);
+            if (exact >= 0) secondary(exact);
           }
           // The typo rule is checked per proposal here: these one-edit neighbourhoods are small.
-          if (budget > 1) this.words.forEachNear(variant, budget - 1, secondary);
+          if (budget > 1) lexicon.forEachNear(variant, budget - 1, secondary);
         }
       }
     } finally {
@@ -367,4 +435,11 @@ export class TextIndex {
     }
     return matches;
   }
+}
+
+/** The words a query's terms matched, for highlighting. */
+export function matchedWordsOf(matches: readonly TermMatches[]): Set<string> {
+  const words = new Set<string>();
+  for (const match of matches) for (const index of match.wordIndexes) words.add(match.wordList[index] as string);
+  return words;
 }

@@ -6,13 +6,18 @@ import { buyerEmails, summaryMail } from './summary-mail';
 /** Above this many touched parts one rebuild is cheaper than refreshing them in pieces. */
 const REBUILD_ABOVE = 5000;
 
-/** Parts whose search documents a commit changed: the new ones and both ends of each link. */
+/**
+ * Parts whose search documents a commit changed: the new ones and both ends of each link, of
+ * our own brands (the only ones the Counter's index holds). Prices are not in the documents.
+ */
 async function touchedPartIds(deps: AppDeps, listId: string): Promise<string[]> {
   const rows = (await deps.dataSource.query(
-    `SELECT p.id FROM price_list_row r JOIN part p ON p.brand_id = r.brand_id AND p.part_number_norm = r.part_number_norm
+    `SELECT p.id FROM price_list_row r JOIN brand b ON b.id = r.brand_id AND b.ours
+       JOIN part p ON p.brand_id = r.brand_id AND p.part_number_norm = r.part_number_norm
       WHERE r.price_list_id = $1 AND (r.change = 'new' OR r.supersession = 'link')
      UNION
-     SELECT old.id FROM price_list_row r JOIN part old ON old.brand_id = r.brand_id AND old.part_number_norm = r.supersedes_norm
+     SELECT old.id FROM price_list_row r JOIN brand b ON b.id = r.brand_id AND b.ours
+       JOIN part old ON old.brand_id = r.brand_id AND old.part_number_norm = r.supersedes_norm
       WHERE r.price_list_id = $1 AND r.supersession = 'link'`,
     [listId],
   )) as { id: string }[];

@@ -72,11 +72,22 @@ describe('stand-in lexicon fuzzy lookups', () => {
     const { lexicon, tree } = buildLexicon(words, 3);
     const queries = Array.from({ length: 60 }, () => mutate(random, randomWord(random, alphabet, 1, 10), alphabet));
 
+    it(`indexOf and forEachWithPrefix agree with the word list (alphabet ${alphabet})`, () => {
+      const sorted = [...words].sort();
+      expect(lexicon.words).toEqual(sorted);
+      for (const query of queries) {
+        expect(lexicon.indexOf(query)).toBe(sorted.indexOf(query));
+        const found: string[] = [];
+        lexicon.forEachWithPrefix(query.slice(0, 2), (index) => found.push(lexicon.words[index] as string));
+        expect(found).toEqual(sorted.filter((word) => word.startsWith(query.slice(0, 2))));
+      }
+    });
+
     it(`forEachNear finds what minisearch's fuzzyGet finds (alphabet ${alphabet})`, () => {
       for (const query of queries) {
         for (const distance of [0, 1, 2]) {
           const found: string[] = [];
-          lexicon.forEachNear(query, distance, (word) => found.push(word));
+          lexicon.forEachNear(query, distance, (index) => found.push(lexicon.words[index] as string));
           const expected = [...tree.fuzzyGet(query, distance).keys()].sort();
           expect(found, `${query} within ${distance}`).toEqual(expected);
         }
@@ -91,9 +102,12 @@ describe('stand-in lexicon fuzzy lookups', () => {
             for (const centerDistance of [budget - 1, budget]) {
               for (const asPrefix of [false, true]) {
                 const found: Array<[string, number]> = [];
-                lexicon.forEachTypoMatch(center, centerDistance, term, budget, asPrefix, (word, _list, typos) => found.push([word, typos]));
+                lexicon.forEachTypoMatch(center, centerDistance, term, budget, asPrefix, (index, typos) => {
+                  found.push([lexicon.words[index] as string, typos]);
+                });
                 const expected: Array<[string, number]> = [];
-                lexicon.forEachNear(center, centerDistance, (word) => {
+                lexicon.forEachNear(center, centerDistance, (index) => {
+                  const word = lexicon.words[index] as string;
                   const typos = typosBetween(term, word, budget, asPrefix);
                   if (typos !== null) expected.push([word, typos]);
                 });
