@@ -1,4 +1,5 @@
 import { runCompatRankBench } from './compat-rank';
+import { runPriceListImportBench } from './price-list-import';
 import { runParseBench } from './price-list-parse';
 import { runSearchBench } from './search-bench';
 
@@ -15,6 +16,12 @@ async function main(): Promise<void> {
   if (wanted('parse')) {
     console.log('\n== price-list parsing (csv-parse + validation, no database)');
     await runParseBench();
+  }
+  if (wanted('import')) {
+    const url = process.env.DATABASE_URL;
+    if (!url) throw new Error('DATABASE_URL is not set (npm run bench sets it)');
+    console.log('\n== price-list import end to end (parse, validate, stage, diff, commit) against psql \\copy');
+    await runPriceListImportBench(url);
   }
   if (wanted('search')) {
     console.log('\n== search');
