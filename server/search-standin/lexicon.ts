@@ -19,6 +19,10 @@
  * reused if the word comes back, so the views never disagree.
  */
 import { createPostingList, type PostingList } from './posting-list';
+import { typosBetween } from './typo-distance';
+
+/** New words kept out of a built trie (checked one by one) before it is rebuilt. */
+const MAX_RECENT_WORDS = 2000;
 
 export class Lexicon {
   private readonly byWord = new Map<string, PostingList>();
@@ -27,6 +31,8 @@ export class Lexicon {
   /** Words added since the last publish(); not yet in the sorted array or the trie. */
   private pending: string[] = [];
   private trie: FlatTrie | null = null;
+  /** Published words not in the trie (added after it was built), checked one by one. */
+  private recentWords: string[] = [];
 
   get(word: string): PostingList | undefined {
     return this.byWord.get(word);
@@ -69,13 +75,17 @@ export class Lexicon {
     return list;
   }
 
-  /** Makes new words visible to prefix and fuzzy lookups: once per batch, not per query. */
-  publish(): void {
-    if (this.pending.length === 0) return;
+  /**
+   * Makes new words visible to prefix and fuzzy lookups: once per batch, not per query. Returns,
+   * when words were added, each old word's new index (for per-word data kept elsewhere), else null.
+   */
+  publish(): Int32Array | null {
+    if (this.pending.length === 0) return null;
     const added = this.pending.sort();
     this.pending = [];
     const words: string[] = new Array<string>(this.sortedWords.length + added.length);
     const lists: PostingList[] = new Array<PostingList>(words.length);
+    const moved = new Int32Array(this.sortedWords.length);
     let i = 0;
     let j = 0;
     let k = 0;
@@ -85,6 +95,7 @@ export class Lexicon {
       if (fresh === undefined || (old !== undefined && old < fresh)) {
         words[k] = old as string;
         lists[k] = this.sortedLists[i] as PostingList;
+        moved[i] = k;
         i++;
       } else {
         words[k] = fresh;
@@ -95,12 +106,33 @@ export class Lexicon {
     }
     this.sortedWords = words;
     this.sortedLists = lists;
-    this.trie = null;
+    if (this.trie && this.recentWords.length + added.length <= MAX_RECENT_WORDS) {
+      // A few new words (a catalog edit) keep the trie: its word numbers move, and the new words
+      // are checked one by one until there are enough of them to build it again.
+      const nodes = this.trie;
+      for (let node = 0; node < nodes.length; node += 3) {
+        const found = nodes[node + WORD] as number;
+        if (found >= 0) nodes[node + WORD] = moved[found] as number;
+      }
+      for (const word of added) this.recentWords.push(word);
+    } else {
+      this.trie = null;
+      this.recentWords = [];
+    }
+    return moved;
   }
 
   private flatTrie(): FlatTrie {
-    this.trie ??= buildTrie(this.sortedWords);
+    if (!this.trie) {
+      this.trie = buildTrie(this.sortedWords);
+      this.recentWords = [];
+    }
     return this.trie;
+  }
+
+  /** Words published since the trie was built, with their current indexes. */
+  private forEachRecentWord(visit: (word: string, index: number) => void): void {
+    for (const word of this.recentWords) visit(word, this.indexOf(word));
   }
 
   /** Calls `visit` with the index of every word starting with `prefix`, in sorted order. */
@@ -152,6 +184,9 @@ export class Lexicon {
       }
     };
     walk(0, 0);
+    this.forEachRecentWord((candidate, index) => {
+      if (levenshtein(word, candidate, distance) <= distance) visit(index);
+    });
   }
 
   /**
@@ -166,7 +201,7 @@ export class Lexicon {
     center: string,
     centerDistance: number,
     term: string,
-    budget: number,
+    budget: 0 | 1 | 2,
     asPrefix: boolean,
     visit: (index: number, typos: number) => void,
   ): void {
@@ -256,6 +291,11 @@ export class Lexicon {
       }
     };
     walk(0, 0);
+    this.forEachRecentWord((candidate, index) => {
+      if (levenshtein(center, candidate, centerDistance) > centerDistance) return;
+      const typos = typosBetween(term, candidate, budget, asPrefix);
+      if (typos !== null) visit(index, typos);
+    });
   }
 }
 
@@ -295,6 +335,24 @@ function buildTrie(words: readonly string[]): FlatTrie {
   });
   while (stack.length > 0) nodes[(stack.pop() as number) * 3 + END] = next;
   return nodes;
+}
+
+/** Levenshtein distance between a and b, or any value above `bound` once it is sure to exceed it. */
+function levenshtein(a: string, b: string, bound: number): number {
+  if (Math.abs(a.length - b.length) > bound) return bound + 1;
+  let previous = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    const current = [i];
+    let best = i;
+    for (let j = 1; j <= b.length; j++) {
+      const cell = Math.min((previous[j] as number) + 1, (current[j - 1] as number) + 1, (previous[j - 1] as number) + (a[i - 1] === b[j - 1] ? 0 : 1));
+      current.push(cell);
+      if (cell < best) best = cell;
+    }
+    if (best > bound) return bound + 1;
+    previous = current;
+  }
+  return previous[b.length] as number;
 }
 
 function commonPrefixLength(a: string, b: string): number {

@@ -48,6 +48,8 @@ interface TextCandidates {
   attributeRank: Uint8Array;
   exactWords: Uint8Array;
   score: Float64Array;
+  /** Packed ranking keys, when the ranking rules allow them. */
+  keys: Int32Array | null;
   /** The same documents as a bitset, when facets are asked for. */
   bits: Bitset | null;
   /** What every term matched, when highlighting is asked for. */
@@ -79,7 +81,14 @@ function placeholderCandidate(record: DocumentRecord): RankedCandidate {
   return { record, level: 0, typos: 0, attributeRank: 0, exactWords: 0, score: 0 };
 }
 
-function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[], filterBits: Bitset | null, wantBits: boolean): TextCandidates {
+function matchTerms(
+  index: StandinIndex,
+  request: SearchRequest,
+  terms: string[],
+  filterBits: Bitset | null,
+  wantBits: boolean,
+  packed: PackedRanking | null,
+): TextCandidates {
   const settings = index.resolved;
   const text = index.text();
   const budgetRules = {
@@ -129,6 +138,7 @@ function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[]
     attributeRank: scratch('attributeRank', capacity, uint8s),
     exactWords: scratch('exactWords', capacity, uint8s),
     score: scratch('score', capacity, float64s),
+    keys: packed ? scratch('keys', capacity, int32s) : null,
     bits: wantBits ? createBitset(index.fieldStore.size) : null,
     matchedWords: null,
   };
@@ -136,23 +146,24 @@ function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[]
   // The other terms are joined through slot -> entry maps; the driver is walked directly.
   const others = order.slice(1).map((i) => matches[i] as TermMatches);
   text.withEntryMaps(others, (maps) => {
-    // For the score, every term counts, in query order; entry maps by query position.
-    const mapByTerm: Array<Int32Array | null> = matches.map(() => null);
-    order.slice(1).forEach((termIndex, k) => {
-      mapByTerm[termIndex] = maps[k] as Int32Array;
-    });
+    // Each other term is looked up once per document; its entry serves the rules and the score.
+    const entries = new Int32Array(others.length);
+    // For the score every matched term counts, summed in query order: where each term's entry is.
     const driverIndex = order[0] as number;
+    const entryOfTerm = matches.map((_, t) => (t === driverIndex ? -1 : order.indexOf(t) - 1));
     const seqOfSlot = text.slotSeqs;
+    const keys = found.keys;
     for (let i = 0; i < driver.count; i++) {
       const slot = driver.slots[i] as number;
       const seq = seqOfSlot[slot] as number;
       if (seq < 0 || (filterBits && !hasBit(filterBits, seq))) continue;
+      for (let k = 0; k < others.length; k++) entries[k] = (maps[k] as Int32Array)[slot] as number;
       let level = 1;
       let typos = driver.typos[i] as number;
       let attributeRank = driver.attributeRank[i] as number;
       let exactWords = driver.exact[i] as number;
       for (let k = 0; k < others.length; k++) {
-        const entry = (maps[k] as Int32Array)[slot] as number;
+        const entry = entries[k] as number;
         if (entry < 0) break;
         const match = others[k] as TermMatches;
         level++;
@@ -164,12 +175,12 @@ function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[]
       if (level < required) continue;
       let score = 0;
       for (let t = 0; t < matches.length; t++) {
-        if (t === driverIndex) {
-          score += driver.score[i] as number;
-          continue;
+        const k = entryOfTerm[t] as number;
+        if (k < 0) score += driver.score[i] as number;
+        else {
+          const entry = entries[k] as number;
+          if (entry >= 0) score += (others[k] as TermMatches).score[entry] as number;
         }
-        const entry = (mapByTerm[t] as Int32Array)[slot] as number;
-        if (entry >= 0) score += (matches[t] as TermMatches).score[entry] as number;
       }
       const n = found.count++;
       found.slots[n] = slot;
@@ -180,6 +191,7 @@ function matchTerms(index: StandinIndex, request: SearchRequest, terms: string[]
       found.attributeRank[n] = attributeRank;
       found.exactWords[n] = exactWords;
       found.score[n] = score;
+      if (keys && packed) keys[n] = packRank(packed, level, typos, attributeRank, exactWords);
     }
   });
   // Matched words are only spelled out for highlighting: a fuzzy term meets hundreds of words.
@@ -313,21 +325,12 @@ function rankCandidates({ index, terms, request, filter, facetNames, distinct, c
     for (let i = 0; i < documents.count; i++) all.push(placeholderCandidate(index.bySeq.get(seqs[i] as number) as DocumentRecord));
     facets = facetsOver(index, facetNames, documents);
   } else {
-    const found = matchTerms(index, request, terms, bits, facetNames !== null && facetNames.length > 0);
+    const fast = packed && !distinct ? packed : null;
+    const found = matchTerms(index, request, terms, bits, facetNames !== null && facetNames.length > 0, fast);
     matchedWords = found.matchedWords;
     facets = facetsOver(index, facetNames, { count: found.count, list: () => found.seqs, bits: found.bits, ascending: false });
-    if (packed && !distinct) {
-      const keys = scratch('keys', found.count, int32s);
-      for (let i = 0; i < found.count; i++) {
-        keys[i] = packRank(
-          packed,
-          found.level[i] as number,
-          found.typos[i] as number,
-          found.attributeRank[i] as number,
-          found.exactWords[i] as number,
-        );
-      }
-      const best = selectTopPacked(found.count, window.end, keys, found.score, found.seqs);
+    if (found.keys) {
+      const best = selectTopPacked(found.count, window.end, found.keys, found.score, found.seqs);
       return { ranked: best.map((i) => candidateAt(index, found, i)), total: found.count, facets, matchedWords };
     }
     all = [];

@@ -1,11 +1,15 @@
 /**
- * Full-text side of one index: a lexicon of words (exact, prefix and — through minisearch's radix
- * tree — Levenshtein lookups), each with a compact posting list, scored with BM25 here.
- * MiniSearch's own search() is not used: it builds objects per matching document and spent
- * 100–600 ms on a common word or a three-letter prefix over 100,000 parts.
+ * Full-text side of one index: a lexicon of words (exact, prefix and Levenshtein lookups, see
+ * lexicon.ts), each with a compact posting list, scored with BM25 here. MiniSearch's own search()
+ * is not used: it builds objects per matching document and spent 100–600 ms on a common word or a
+ * three-letter prefix over 100,000 parts.
  *
- * Candidate words are re-checked against Meilisearch's typo rules (typo-distance.ts), which count
- * a transposition as one typo; adjacent-swap variants of the term are looked up so those are found.
+ * Candidate words are checked against Meilisearch's typo rules (typo-distance.ts), which count a
+ * transposition as one typo; adjacent-swap variants of the term are looked up so those are found.
+ *
+ * For queries, the per-word lists are packed into one set of typed arrays in word order (rebuilt
+ * on the first lookup after a write), and each term's matches are cached until the next write:
+ * the app sends the same words ("spark", "plug", "coil") all day.
  */
 import type { DocumentRecord } from './document-record';
 import { isJsonObject, valuesAtPath, type JsonObject } from './field-paths';
@@ -40,16 +44,26 @@ export interface TermMatches {
 }
 
 /**
- * Every word's live postings in one place, words in sorted order: word i's entries are
- * [start[i], start[i + 1]). Built from the per-word lists on the first lookup after a write, so a
- * lookup reads contiguous memory and needs no liveness checks, and neighbouring words (part
- * numbers one digit apart) are neighbours in memory.
+ * Every word's postings in one place, words in sorted order: word i's entries are
+ * [start[i], start[i] + count[i]), the live entries of its list when they were packed, and
+ * neighbouring words (part numbers one digit apart) are neighbours in memory. A lookup reads these
+ * instead of 600,000 scattered lists. Packed on the first lookup after a large write; a small
+ * write (a catalog edit) keeps them: deleted or rewritten documents' entries are skipped as dead
+ * slots, and postings appended since are read from the list itself past `packedLength[i]`
+ * (`tail[i]` set).
  */
 interface PackedPostings {
   start: Int32Array;
+  count: Int32Array;
+  /** The list's length when packed (dead entries included): where its tail starts. */
+  packedLength: Int32Array;
+  tail: Uint8Array;
   slots: Int32Array;
   infos: Int32Array;
 }
+
+/** A write of more documents than this drops the packed postings instead of amending them. */
+const MAX_AMENDED_DOCUMENTS = 500;
 
 export interface TermQuery {
   term: string;
@@ -70,6 +84,9 @@ interface Derivation {
 const MAX_CACHED_TERMS = 256;
 const MAX_CACHED_ENTRIES = 3_000_000;
 const INITIAL_MATCH_CAPACITY = 64;
+/** Entry maps (4 bytes per slot) are kept for at most this many cached terms of at least this many matches. */
+const MAX_KEPT_MAPS = 16;
+const KEPT_MAP_MIN_ENTRIES = 2048;
 
 const BM25_K1 = 1.2;
 const BM25_B = 0.7;
@@ -106,7 +123,12 @@ export class TextIndex {
   private totalLength = 0;
   private readonly isLive = (slot: number): boolean => this.recordBySlot[slot] !== undefined;
   private readonly termCache = new Map<string, TermMatches>();
+  /** The cached terms' results, and the entry maps kept for the largest of them. */
+  private readonly cachedTerms = new Set<TermMatches>();
+  private readonly entryMaps = new Map<TermMatches, Int32Array>();
   private packed: PackedPostings | null = null;
+  /** Entries in all lists, dead ones included: the size of a packing. */
+  private postingCount = 0;
   private cachedEntries = 0;
   /** Slot -> entry index, -1 elsewhere: one while a term is collected, more while terms are joined. */
   private readonly scratch: Int32Array[] = [];
@@ -138,6 +160,9 @@ export class TextIndex {
 
   addAll(records: Iterable<DocumentRecord>): void {
     this.forgetTerms();
+    // Words given new postings, to amend the packed postings after a small write.
+    let touched: Set<string> | null = this.packed ? new Set() : null;
+    let documents = 0;
     // Per document: word -> packed field mask and frequency, without an object per word.
     const perWord = new Map<string, number>();
     let bit = 0;
@@ -169,10 +194,40 @@ export class TextIndex {
         list.slots.push(slot);
         list.infos.push(info);
       }
+      this.postingCount += perWord.size;
+      if (touched && ++documents > MAX_AMENDED_DOCUMENTS) touched = null;
+      else if (touched) for (const word of perWord.keys()) touched.add(word);
       this.lengthBySlot[slot] = length;
       this.totalLength += length;
     }
-    this.words.publish();
+    const moved = this.words.publish();
+    if (!touched) this.packed = null;
+    else if (this.packed) this.amendPacked(moved, touched);
+  }
+
+  /** After a small write: word numbers move past new words, and touched words have a tail. */
+  private amendPacked(moved: Int32Array | null, touched: ReadonlySet<string>): void {
+    let packed = this.packed as PackedPostings;
+    if (moved) {
+      const size = this.words.words.length;
+      const start = new Int32Array(size);
+      const count = new Int32Array(size);
+      const packedLength = new Int32Array(size);
+      const tail = new Uint8Array(size).fill(1);
+      for (let i = 0; i < moved.length; i++) {
+        const k = moved[i] as number;
+        start[k] = packed.start[i] as number;
+        count[k] = packed.count[i] as number;
+        packedLength[k] = packed.packedLength[i] as number;
+        tail[k] = packed.tail[i] as number;
+      }
+      packed = { ...packed, start, count, packedLength, tail };
+      this.packed = packed;
+    }
+    for (const word of touched) {
+      const index = this.words.indexOf(word);
+      if (index >= 0) packed.tail[index] = 1;
+    }
   }
 
   discard(seq: number): void {
@@ -196,38 +251,44 @@ export class TextIndex {
 
   /** Scores depend on the document count and lengths: any write drops every cached term. */
   private forgetTerms(): void {
-    this.packed = null;
     if (this.termCache.size === 0) return;
     this.termCache.clear();
+    this.cachedTerms.clear();
+    this.entryMaps.clear();
     this.cachedEntries = 0;
   }
 
   private packedPostings(): PackedPostings {
     if (this.packed) return this.packed;
     const lists = this.words.lists;
-    let total = 0;
-    for (const list of lists) {
-      let stale = 0;
-      for (const slot of list.slots) if (this.recordBySlot[slot] === undefined) stale++;
-      // Lists left mostly stale by rewrites are compacted in place, as reads used to.
-      total += stale > 0 ? compactIfStale(list, this.isLive, stale) : list.slots.length;
-    }
-    const start = new Int32Array(lists.length + 1);
-    const slots = new Int32Array(total);
-    const infos = new Int32Array(total);
+    const start = new Int32Array(lists.length);
+    const count = new Int32Array(lists.length);
+    const packedLength = new Int32Array(lists.length);
+    const slots = new Int32Array(this.postingCount);
+    const infos = new Int32Array(this.postingCount);
+    const seqOfSlot = this.seqBySlot;
     let at = 0;
+    let remaining = 0;
     lists.forEach((list, k) => {
       start[k] = at;
-      for (let i = 0; i < list.slots.length; i++) {
-        const slot = list.slots[i] as number;
-        if (this.recordBySlot[slot] === undefined) continue;
+      const listSlots = list.slots;
+      const listInfos = list.infos;
+      for (let i = 0; i < listSlots.length; i++) {
+        const slot = listSlots[i] as number;
+        if ((seqOfSlot[slot] as number) < 0) continue;
         slots[at] = slot;
-        infos[at] = list.infos[i] as number;
+        infos[at] = listInfos[i] as number;
         at++;
       }
+      const live = at - (start[k] as number);
+      // Lists left mostly dead by rewrites are compacted in place, as reads used to.
+      if (live !== listSlots.length) compactIfStale(list, this.isLive, listSlots.length - live);
+      count[k] = live;
+      packedLength[k] = listSlots.length;
+      remaining += listSlots.length;
     });
-    start[lists.length] = at;
-    this.packed = { start, slots, infos };
+    this.postingCount = remaining;
+    this.packed = { start, count, packedLength, tail: new Uint8Array(lists.length), slots, infos };
     return this.packed;
   }
 
@@ -246,19 +307,43 @@ export class TextIndex {
    * did not match), and clears the maps afterwards.
    */
   withEntryMaps<T>(matches: readonly TermMatches[], join: (maps: Int32Array[]) => T): T {
-    const maps = this.scratchMaps(matches.length);
-    matches.forEach((match, k) => {
-      const map = maps[k] as Int32Array;
+    const scratch = this.scratchMaps(matches.length);
+    const filled: Array<TermMatches | null> = [];
+    const maps = matches.map((match, k) => {
+      const kept = this.keptEntryMap(match);
+      if (kept) {
+        filled.push(null);
+        return kept;
+      }
+      const map = scratch[k] as Int32Array;
       for (let i = 0; i < match.count; i++) map[match.slots[i] as number] = i;
+      filled.push(match);
+      return map;
     });
     try {
       return join(maps);
     } finally {
-      matches.forEach((match, k) => {
+      filled.forEach((match, k) => {
+        if (!match) return;
         const map = maps[k] as Int32Array;
         for (let i = 0; i < match.count; i++) map[match.slots[i] as number] = -1;
       });
     }
+  }
+
+  /**
+   * A cached term with many matches keeps its slot -> entry map, so joining it ("spark" in every
+   * "… spark plug" query) costs no fill and clear; a few such maps are kept, the oldest dropped.
+   */
+  private keptEntryMap(match: TermMatches): Int32Array | null {
+    const kept = this.entryMaps.get(match);
+    if (kept) return kept;
+    if (match.count < KEPT_MAP_MIN_ENTRIES || !this.cachedTerms.has(match)) return null;
+    if (this.entryMaps.size >= MAX_KEPT_MAPS) this.entryMaps.delete(this.entryMaps.keys().next().value as TermMatches);
+    const map = new Int32Array(this.recordBySlot.length).fill(-1);
+    for (let i = 0; i < match.count; i++) map[match.slots[i] as number] = i;
+    this.entryMaps.set(match, map);
+    return map;
   }
 
   /** Every document matching one query term, with how it matched; cached until the next write. */
@@ -277,10 +362,14 @@ export class TextIndex {
       while (this.termCache.size >= MAX_CACHED_TERMS || this.cachedEntries + matches.count > MAX_CACHED_ENTRIES) {
         const oldest = this.termCache.keys().next();
         if (oldest.done) break;
-        this.cachedEntries -= (this.termCache.get(oldest.value) as TermMatches).count;
+        const dropped = this.termCache.get(oldest.value) as TermMatches;
+        this.cachedEntries -= dropped.count;
         this.termCache.delete(oldest.value);
+        this.cachedTerms.delete(dropped);
+        this.entryMaps.delete(dropped);
       }
       this.termCache.set(key, matches);
+      this.cachedTerms.add(matches);
       this.cachedEntries += matches.count;
     }
     return matches;
@@ -290,7 +379,9 @@ export class TextIndex {
     const { term, asPrefix, budget } = query;
     const lexicon = this.words;
     const wordList = lexicon.words;
-    const { start, slots, infos } = this.packedPostings();
+    const { start, count: packedCount, packedLength, tail, slots, infos } = this.packedPostings();
+    const lists = lexicon.lists;
+    const seqOfSlot = this.seqBySlot;
     let capacity = INITIAL_MATCH_CAPACITY;
     const matches: TermMatches = {
       count: 0,
@@ -322,19 +413,19 @@ export class TextIndex {
     const lengthBySlot = this.lengthBySlot;
     const typoDisabledMask = this.typoDisabledMask;
 
-    /** Adds the documents of word `index` (postings are all live). */
+    /** Adds the live documents of word `index`: its packed entries, then any appended since. */
     const collect = (index: number, derivation: Derivation): void => {
       const from = start[index] as number;
-      const to = start[index + 1] as number;
-      const documents = to - from;
+      const to = from + (packedCount[index] as number);
+      // The list's length, dead entries included, as the document frequency (as reads always did).
+      const list = tail[index] === 1 ? (lists[index] as PostingList) : null;
+      const documents = list ? list.slots.length : (packedLength[index] as number);
       let matchedAny = false;
       const idf = Math.log(1 + (documentCount - documents + 0.5) / (documents + 0.5));
       const typoMask = derivation.typos > 0 ? ~typoDisabledMask : -1;
-      for (let p = from; p < to; p++) {
-        const slot = slots[p] as number;
-        const info = infos[p] as number;
+      const add = (slot: number, info: number): void => {
         const mask = fieldMaskOf(info) & allowedMask & typoMask;
-        if (mask === 0) continue;
+        if (mask === 0) return;
         matchedAny = true;
         const frequency = frequencyOf(info);
         const lengthRatio = (lengthBySlot[slot] as number) / averageLength;
@@ -355,6 +446,16 @@ export class TextIndex {
           if (derivation.exact) matches.exact[entry] = 1;
           if (rank < (matches.attributeRank[entry] as number)) matches.attributeRank[entry] = rank;
           if (score > (matches.score[entry] as number)) matches.score[entry] = score;
+        }
+      };
+      for (let p = from; p < to; p++) {
+        const slot = slots[p] as number;
+        if ((seqOfSlot[slot] as number) >= 0) add(slot, infos[p] as number);
+      }
+      if (list) {
+        for (let i = packedLength[index] as number; i < list.slots.length; i++) {
+          const slot = list.slots[i] as number;
+          if ((seqOfSlot[slot] as number) >= 0) add(slot, list.infos[i] as number);
         }
       }
       // Prefix matches are many (a short prefix can match 100,000 words) and highlight by `prefix`.

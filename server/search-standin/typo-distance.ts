@@ -1,8 +1,9 @@
 /**
- * Meilisearch's typo rules. Its automata count a transposition as one typo (Damerau) while
- * minisearch's radix-tree fuzzy lookup counts plain Levenshtein, so that lookup only proposes
- * candidate words and every candidate is re-checked here. Meilisearch also counts a typo on the
- * first letter as two: with a one-typo budget the first letter must match.
+ * Meilisearch's typo rules. Its automata count a transposition as one typo (Damerau) while the
+ * lexicon's fuzzy lookup counts plain Levenshtein (as minisearch's radix tree did), so that lookup
+ * only proposes candidate words and every candidate is checked by these rules (the term's own
+ * lookup applies them during the walk, Lexicon.forEachTypoMatch). Meilisearch also counts a typo
+ * on the first letter as two: with a one-typo budget the first letter must match.
  */
 
 export interface TypoBudgetRules {

@@ -1,7 +1,9 @@
 import { randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import type { Response } from 'supertest';
+import type { DataSource } from 'typeorm';
 import { expect } from 'vitest';
+import { supplierPrices } from '../../seed/data/suppliers';
 import type { Mapping } from '../../shared/price-list/mapping';
 import type { PriceList, Supplier } from '../../shared/schemas/price-list';
 import type { Agent } from './test-app';
@@ -32,13 +34,6 @@ export async function newSupplier({ agent, token }: Signed, label = 'Test suppli
   return (res.body as { supplier: Supplier }).supplier;
 }
 
-export async function supplierIdByKey({ agent }: Signed, key: string): Promise<string> {
-  const res = await agent.get('/api/suppliers').expect(200);
-  const found = (res.body as { suppliers: Supplier[] }).suppliers.find((s) => s.key === key);
-  if (!found) throw new Error(`no supplier ${key}`);
-  return found.id;
-}
-
 export interface UploadOptions {
   supplierId: string;
   file: Buffer | string;
@@ -64,4 +59,20 @@ export async function stage(signed: Signed, opts: UploadOptions): Promise<PriceL
 
 export function post({ agent, token }: Signed, path: string, body: object = {}): Promise<Response> {
   return agent.post(path).set('x-csrf-token', token).send(body);
+}
+
+/**
+ * A supplier of the test's own holding a demo supplier's prices as seeded (seed/data/suppliers.ts),
+ * whatever other tests or journeys have since committed for the demo supplier itself.
+ */
+export async function supplierWithSeedPrices(ds: DataSource, signed: Signed, seedKey: string): Promise<Supplier> {
+  const supplier = await newSupplier(signed, `Copy of ${seedKey}`);
+  for (const p of supplierPrices.filter((sp) => sp.supplierKey === seedKey)) {
+    await ds.query(
+      `INSERT INTO supplier_price (supplier_id, part_id, cost_cents, list_cents, core_cents, pack_qty, effective_date)
+       SELECT $1, id, $3, $4, $5, $6, $7 FROM part WHERE part_number = $2`,
+      [supplier.id, p.partNumber, p.costCents, p.listCents, p.coreChargeCents, p.packQty, p.effectiveDate],
+    );
+  }
+  return supplier;
 }

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { FIELD_LABELS, PLUG_SPEC_FIELDS } from '../../../shared/price-list/fields';
+import { COIL_SPEC_FIELDS, FIELD_LABELS, PLUG_SPEC_FIELDS } from '../../../shared/price-list/fields';
 import type { CommitPriceListResponse, PriceList, PriceListHistory, Supplier } from '../../../shared/schemas/price-list';
 import type { SearchResponse } from '../../../shared/schemas/search';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
@@ -23,9 +23,27 @@ const PLUG_SPEC: Record<(typeof PLUG_SPEC_FIELDS)[number], string> = {
   electrode: 'iridium',
   heatCode: '6',
 };
-const SPEC_HEADER = PLUG_SPEC_FIELDS.map((f) => FIELD_LABELS[f]);
-const HEADER = [...STANDARD_HEADER, ...SPEC_HEADER];
-const noSpec = (): Cell[] => PLUG_SPEC_FIELDS.map(() => null);
+/** A whole coil spec in the trade's units (Ω, kΩ, mH, kV, A). */
+const COIL_SPEC: Record<(typeof COIL_SPEC_FIELDS)[number], string> = {
+  architecture: 'coil-on-plug',
+  driver: 'integrated',
+  outputs: '1',
+  connectorPins: '3',
+  connectorKey: 'A',
+  primaryOhmMin: '0.5',
+  primaryOhmMax: '0.8',
+  primaryInductanceMh: '2.5',
+  secondaryKohmMin: '6',
+  secondaryKohmMax: '9',
+  turnsRatio: '80',
+  availableKv: '35',
+  peakCurrentA: '7.5',
+};
+const SPEC_FIELDS = [...COIL_SPEC_FIELDS, ...PLUG_SPEC_FIELDS];
+// The spec columns under the labels the mapping screen shows, which the guess knows.
+const HEADER = [...STANDARD_HEADER, ...SPEC_FIELDS.map((f) => FIELD_LABELS[f])];
+const SPECS: Record<'coil' | 'plug', Record<string, string>> = { coil: COIL_SPEC, plug: PLUG_SPEC };
+const specCells = (spec: 'coil' | 'plug' | undefined): Cell[] => SPEC_FIELDS.map((f) => (spec ? SPECS[spec][f] : undefined) ?? null);
 
 function line(
   number: string,
@@ -33,7 +51,7 @@ function line(
   cost: string,
   list: string,
   kind: string,
-  opts: { supersedes?: string; spec?: boolean; pack?: number } = {},
+  opts: { supersedes?: string; spec?: 'coil' | 'plug'; pack?: number } = {},
 ): Cell[] {
   return [
     number,
@@ -46,7 +64,7 @@ function line(
     null,
     opts.supersedes ?? null,
     kind,
-    ...(opts.spec ? PLUG_SPEC_FIELDS.map((f) => PLUG_SPEC[f]) : noSpec()),
+    ...specCells(opts.spec),
   ];
 }
 
@@ -99,19 +117,20 @@ describe('commit and discard', () => {
       line('QW-IC 3140', 'Quaywell', '26.00', '53.00', 'coil'),
       line('QW-SP 1406', 'Quaywell', '3.30', '7.59', 'plug', { pack: 4 }),
       line('NR/IR 2208', 'Norrow', '7.00', '15.99', 'plug', { pack: 4 }),
-      line(`QW-SP T${tag}1`, 'Quaywell', '4.10', '9.99', 'plug', { spec: true, pack: 4 }),
+      line(`QW-SP T${tag}1`, 'Quaywell', '4.10', '9.99', 'plug', { spec: 'plug', pack: 4 }),
       line(`QW-IC T${tag}2`, 'Quaywell', '20.00', '41.00', 'coil'),
+      line(`QW-IC T${tag}4`, 'Quaywell', '22.00', '45.00', 'coil', { spec: 'coil' }),
       line(`QW-IC T${tag}3`, 'Quaywell', '21.00', '43.00', 'coil', { supersedes: `QW-IC T${tag}2` }),
     ]);
     const staged = await stage(buyer, { supplierId: supplier.id, file, fileName: 'harbor.csv' });
-    expect(staged.counts).toEqual({ total: 6, new: 3, changed: 3, unchanged: 0, rejected: 0, firstPrices: 3, supersessions: 1 });
+    expect(staged.counts).toEqual({ total: 7, new: 4, changed: 3, unchanged: 0, rejected: 0, firstPrices: 3, supersessions: 1 });
     expect(await prices(supplier.id)).toEqual([]);
 
     const res = await post(buyer, `/api/price-lists/${staged.id}/commit`);
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     const committed = res.body as CommitPriceListResponse;
     expect(committed).toMatchObject({ status: 'committed', counts: staged.counts, notices: [] });
-    expect(committed.applied).toEqual({ partsCreated: 3, specsStored: 1, pricesWritten: 6, supersessionsLinked: 1 });
+    expect(committed.applied).toEqual({ partsCreated: 4, specsStored: 2, pricesWritten: 7, supersessionsLinked: 1 });
     expect(committed.committedBy?.id).toEqual(staged.createdBy?.id);
     expect(committed.committedAt).toEqual(expect.any(String));
 
@@ -120,12 +139,13 @@ describe('commit and discard', () => {
       ['QW-IC 3140', 2600, 5300, 1, staged.id],
       [`QW-IC T${tag}2`, 2000, 4100, 1, staged.id],
       [`QW-IC T${tag}3`, 2100, 4300, 1, staged.id],
+      [`QW-IC T${tag}4`, 2200, 4500, 1, staged.id],
       ['QW-SP 1406', 330, 759, 4, staged.id],
       [`QW-SP T${tag}1`, 410, 999, 4, staged.id],
     ]);
     const ds = t.deps.dataSource;
     const parts = (await ds.query(
-      `SELECT p.part_number, p.kind, s.part_number AS superseded_by, ps.heat_code, ps.reach_mm, cs.part_id IS NOT NULL AS coil_spec
+      `SELECT p.part_number, p.kind, s.part_number AS superseded_by, ps.heat_code, ps.reach_mm, cs.primary_ohm_max AS coil_ohm_max
          FROM part p LEFT JOIN part s ON s.id = p.superseded_by_id LEFT JOIN plug_spec ps ON ps.part_id = p.id
          LEFT JOIN coil_spec cs ON cs.part_id = p.id WHERE p.part_number LIKE $1 ORDER BY p.part_number`,
       [`%T${tag}%`],
@@ -135,12 +155,13 @@ describe('commit and discard', () => {
       superseded_by: string | null;
       heat_code: string | null;
       reach_mm: number | null;
-      coil_spec: boolean;
+      coil_ohm_max: number | null;
     }[];
     expect(parts).toEqual([
-      { part_number: `QW-IC T${tag}2`, kind: 'coil', superseded_by: `QW-IC T${tag}3`, heat_code: null, reach_mm: null, coil_spec: false },
-      { part_number: `QW-IC T${tag}3`, kind: 'coil', superseded_by: null, heat_code: null, reach_mm: null, coil_spec: false },
-      { part_number: `QW-SP T${tag}1`, kind: 'plug', superseded_by: null, heat_code: '6', reach_mm: 19, coil_spec: false },
+      { part_number: `QW-IC T${tag}2`, kind: 'coil', superseded_by: `QW-IC T${tag}3`, heat_code: null, reach_mm: null, coil_ohm_max: null },
+      { part_number: `QW-IC T${tag}3`, kind: 'coil', superseded_by: null, heat_code: null, reach_mm: null, coil_ohm_max: null },
+      { part_number: `QW-IC T${tag}4`, kind: 'coil', superseded_by: null, heat_code: null, reach_mm: null, coil_ohm_max: 0.8 },
+      { part_number: `QW-SP T${tag}1`, kind: 'plug', superseded_by: null, heat_code: '6', reach_mm: 19, coil_ohm_max: null },
     ]);
     const audits = (await ds.query(`SELECT action, actor_id, data FROM audit_log WHERE entity_id = $1`, [staged.id])) as {
       action: string;
@@ -177,7 +198,7 @@ describe('commit and discard', () => {
     const mail = await mailAbout(supplier.name);
     expect(mail.to).toContain(buyerEmail);
     expect(mail.to).not.toContain(disabled.email);
-    expect(mail.subject).toBe(`Price list committed: ${supplier.name} — 3 new, 3 changed, 0 flagged`);
+    expect(mail.subject).toBe(`Price list committed: ${supplier.name} — 4 new, 3 changed, 0 flagged`);
     expect(mail.text).toContain('harbor.csv');
     expect(mail.text).toContain(staged.sha256);
   });

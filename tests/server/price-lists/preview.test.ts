@@ -2,14 +2,18 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Mapping } from '../../../shared/price-list/mapping';
 import type { PriceList, PriceListChange, PriceListChanges, PriceListErrors } from '../../../shared/schemas/price-list';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
-import { post, SAMPLE, sampleFile, stage, supplierIdByKey, type Signed } from '../../helpers/price-list-api';
+import { post, SAMPLE, sampleFile, stage, supplierWithSeedPrices, type Signed } from '../../helpers/price-list-api';
+import { runTag } from '../../helpers/price-list-files';
 import { createTestApp, signIn, type TestApp } from '../../helpers/test-app';
 
 /**
- * The preview of the three sample files against the demo suppliers' prices. Every expected
- * number comes from seed/csv/README.md and seed/data/suppliers.ts. Nothing here commits, so the
- * demo prices stay as seeded.
+ * The preview of the three sample files against the demo suppliers' prices as seeded. Every
+ * expected number comes from seed/csv/README.md and seed/data/suppliers.ts. The prices are copied
+ * onto suppliers of the test's own, and the clean file's four new numbers carry a tag of this
+ * run: the Price lists journey commits that file, and the tests must not depend on whether it ran.
  */
+
+const NEW_NUMBERS = ['QW-IC 3162', 'QW-CP 5206', 'QW-SP 1418', 'NR/IR 2210'];
 
 const STANDARD_MAPPING: Mapping = {
   'Part Number': 'partNumber',
@@ -37,19 +41,26 @@ describe('preview of the sample files', () => {
   let buyer: Signed;
   let pellworth: string;
   let brackwater: string;
+  const tag = runTag();
+  const fresh = (n: string) => `${n}-${tag}`;
+  const cleanFile = () => {
+    let text = sampleFile(SAMPLE.clean).toString('utf8');
+    for (const n of NEW_NUMBERS) text = text.replace(`${n},`, `${fresh(n)},`);
+    return Buffer.from(text);
+  };
 
   beforeAll(async () => {
     t = await createTestApp();
     buyer = await signIn(t.app, (await makeUser(t.deps.dataSource, 'buyer')).email, TEST_PASSWORD);
-    pellworth = await supplierIdByKey(buyer, 'pellworth');
-    brackwater = await supplierIdByKey(buyer, 'brackwater');
+    pellworth = (await supplierWithSeedPrices(t.deps.dataSource, buyer, 'pellworth')).id;
+    brackwater = (await supplierWithSeedPrices(t.deps.dataSource, buyer, 'brackwater')).id;
   });
   afterAll(() => t.close());
 
   describe('the clean file, against Pellworth', () => {
     let list: PriceList;
     beforeAll(async () => {
-      list = await stage(buyer, { supplierId: pellworth, file: sampleFile(SAMPLE.clean), fileName: SAMPLE.clean });
+      list = await stage(buyer, { supplierId: pellworth, file: cleanFile(), fileName: SAMPLE.clean });
     });
 
     it('guesses every column from its header', () => {
@@ -90,15 +101,10 @@ describe('preview of the sample files', () => {
 
     it('lists the new numbers, each without a spec, and the supersession', async () => {
       const added = await changesOf(buyer, list.id, { type: 'new' });
-      expect(added.map((c) => [c.partNumber, c.partId, c.specStored])).toEqual([
-        ['QW-IC 3162', null, false],
-        ['QW-CP 5206', null, false],
-        ['QW-SP 1418', null, false],
-        ['NR/IR 2210', null, false],
-      ]);
-      expect(added.find((c) => c.partNumber === 'QW-CP 5206')?.newCoreCents).toBe(1500);
+      expect(added.map((c) => [c.partNumber, c.partId, c.specStored])).toEqual(NEW_NUMBERS.map((n) => [fresh(n), null, false]));
+      expect(added.find((c) => c.partNumber === fresh('QW-CP 5206'))?.newCoreCents).toBe(1500);
       const supersessions = await changesOf(buyer, list.id, { type: 'supersession' });
-      expect(supersessions.map((c) => [c.partNumber, c.supersedes, c.supersession])).toEqual([['QW-IC 3162', 'QW-IC 3161', 'link']]);
+      expect(supersessions.map((c) => [c.partNumber, c.supersedes, c.supersession])).toEqual([[fresh('QW-IC 3162'), 'QW-IC 3161', 'link']]);
     });
 
     it('matches numbers printed differently from the catalog', async () => {
@@ -173,7 +179,7 @@ describe('preview of the sample files', () => {
   it('a new mapping confirmed by the buyer re-reads the kept file', async () => {
     // Cost and list swapped by mistake: every known part then looks changed.
     const wrong: Mapping = { ...STANDARD_MAPPING, Cost: 'list', List: 'cost' };
-    const list = await stage(buyer, { supplierId: pellworth, file: sampleFile(SAMPLE.clean), mapping: wrong });
+    const list = await stage(buyer, { supplierId: pellworth, file: cleanFile(), mapping: wrong });
     expect(list.mappingSource).toBe('given');
     expect(list.counts).toMatchObject({ new: 4, changed: 36, unchanged: 0 });
     const res = await post(buyer, `/api/price-lists/${list.id}/preview`, { mapping: STANDARD_MAPPING });

@@ -83,6 +83,37 @@ describe('stand-in lexicon fuzzy lookups', () => {
       }
     });
 
+    it(`keeps finding the same words when a few are added after the trie is built (alphabet ${alphabet})`, () => {
+      const grown = buildLexicon(words, 1);
+      grown.lexicon.forEachNear('a', 1, () => undefined); // builds the trie
+      const extra = Array.from({ length: 120 }, () => mutate(random, randomWord(random, alphabet, 1, 9), alphabet));
+      for (let from = 0; from < extra.length; from += 40) {
+        for (const word of extra.slice(from, from + 40)) {
+          grown.lexicon.fetch(word);
+          grown.tree.set(word, 1);
+        }
+        grown.lexicon.publish();
+        for (const query of queries.slice(0, 20)) {
+          for (const distance of [1, 2]) {
+            const found: string[] = [];
+            grown.lexicon.forEachNear(query, distance, (index) => found.push(grown.lexicon.words[index] as string));
+            expect(found.sort(), `${query} within ${distance}`).toEqual([...grown.tree.fuzzyGet(query, distance).keys()].sort());
+            for (const asPrefix of [false, true]) {
+              const typoFound: string[] = [];
+              grown.lexicon.forEachTypoMatch(query, distance, query, distance as 1 | 2, asPrefix, (index, typos) => {
+                typoFound.push(`${grown.lexicon.words[index] as string}:${typos}`);
+              });
+              const expected = found
+                .map((word) => [word, typosBetween(query, word, distance as 1 | 2, asPrefix)] as const)
+                .filter(([, typos]) => typos !== null)
+                .map(([word, typos]) => `${word}:${typos}`);
+              expect(typoFound.sort()).toEqual(expected.sort());
+            }
+          }
+        }
+      }
+    });
+
     it(`forEachNear finds what minisearch's fuzzyGet finds (alphabet ${alphabet})`, () => {
       for (const query of queries) {
         for (const distance of [0, 1, 2]) {
@@ -94,7 +125,7 @@ describe('stand-in lexicon fuzzy lookups', () => {
       }
     });
 
-    it(`forEachTypoMatch keeps exactly the proposals typosBetween accepts (alphabet ${alphabet})`, () => {
+    it(`forEachTypoMatch keeps exactly the proposals typosBetween accepts (alphabet ${alphabet})`, { timeout: 60_000 }, () => {
       for (const term of queries) {
         const centers = [term, ...Array.from({ length: 3 }, () => mutate(random, term, alphabet))];
         for (const center of centers) {
