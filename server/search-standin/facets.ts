@@ -129,7 +129,12 @@ function countByBitsets(column: FieldColumn, groupBits: Bitset[], bits: Bitset):
  * read per document) or, for a field of few values when a bitset of the documents is at hand, by
  * one AND-and-popcount per value. A group's label is the spelling of its first document.
  */
-export function computeFacets(store: FieldStore, documents: FacetDocuments, names: readonly string[], settings: ResolvedSettings): FacetResult {
+export function computeFacets(
+  store: FieldStore,
+  documents: FacetDocuments,
+  names: readonly string[],
+  settings: ResolvedSettings,
+): FacetResult {
   const facetDistribution: Record<string, Record<string, number>> = {};
   const facetStats: Record<string, FacetStats> = {};
   const words = wordsFor(store.size);
@@ -142,7 +147,9 @@ export function computeFacets(store: FieldStore, documents: FacetDocuments, name
         ? column.groupBitsets(store.size)
         : null;
     const { counts, firstCode } =
-      byBits && documents.bits ? countByBitsets(column, byBits, documents.bits) : countByDocuments(column, documents.list(), documents.count);
+      byBits && documents.bits
+        ? countByBitsets(column, byBits, documents.bits)
+        : countByDocuments(column, documents.list(), documents.count);
     const values: ValueCount[] = [];
     let min = Number.POSITIVE_INFINITY;
     let max = Number.NEGATIVE_INFINITY;

@@ -113,7 +113,11 @@ export class FieldColumn {
    */
   groupBitsets(capacity: number): Bitset[] | null {
     if (this.groupCount > MAX_GROUP_BITSETS) return null;
-    if (this.groupBits && (this.groupBits[0]?.length ?? wordsFor(capacity)) === wordsFor(capacity) && this.groupBits.length === this.groupCount) {
+    if (
+      this.groupBits &&
+      (this.groupBits[0]?.length ?? wordsFor(capacity)) === wordsFor(capacity) &&
+      this.groupBits.length === this.groupCount
+    ) {
       return this.groupBits;
     }
     const bits = Array.from({ length: this.groupCount }, () => createBitset(capacity));
@@ -121,7 +125,8 @@ export class FieldColumn {
     for (let seq = 0; seq < end; seq++) {
       const code = this.single[seq] as number;
       if (code >= 0) setBit(bits[this.codeGroup[code] as number] as Bitset, seq);
-      else if (code === MANY_VALUES) for (const each of this.many[seq] as Int32Array) setBit(bits[this.codeGroup[each] as number] as Bitset, seq);
+      else if (code === MANY_VALUES)
+        for (const each of this.many[seq] as Int32Array) setBit(bits[this.codeGroup[each] as number] as Bitset, seq);
     }
     this.groupBits = bits;
     return bits;

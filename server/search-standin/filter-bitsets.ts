@@ -133,18 +133,39 @@ function compile(node: FilterNode, context: FilterContext): BitsetFilter {
   }
 }
 
-/** Parses and compiles a filter (checking its attributes); null when there is nothing to filter on. */
+/** Compiled filters by source, per filterable-rules object (replaced on every settings change). */
+const compiledFilters = new WeakMap<readonly FilterableRule[], Map<string, BitsetFilter | null>>();
+const MAX_COMPILED_FILTERS = 512;
+
+/**
+ * Parses and compiles a filter (checking its attributes); null when there is nothing to filter on.
+ * The app sends the same few filters all day, so compiled ones are kept (invalid ones are not).
+ */
 export function compileBitsetFilter(filter: unknown, rules: readonly FilterableRule[]): BitsetFilter | null {
-  const node = parseFilter(filter);
-  if (!node) return null;
+  if (filter === undefined || filter === null) return null;
   const source = typeof filter === 'string' ? filter : JSON.stringify(filter);
-  const evaluate = compile(node, { source, rules });
-  // A leaf's bitset only holds documents that have the value, all live; `and`/`or` of them too.
-  return (store) => {
-    const bits = evaluate(store);
-    if (bits.length === store.live.length) return bits;
-    const out = resized(bits, store.size);
-    andInto(out, store.live);
-    return out;
-  };
+  const key = typeof filter === 'string' ? `s${source}` : `a${source}`;
+  let compiled = compiledFilters.get(rules);
+  if (!compiled) {
+    compiled = new Map();
+    compiledFilters.set(rules, compiled);
+  }
+  const known = compiled.get(key);
+  if (known !== undefined) return known;
+  const node = parseFilter(filter);
+  let result: BitsetFilter | null = null;
+  if (node) {
+    const evaluate = compile(node, { source, rules });
+    // A leaf's bitset only holds live documents that have the value; `and`/`or` of them too.
+    result = (store) => {
+      const bits = evaluate(store);
+      if (bits.length === store.live.length) return bits;
+      const out = resized(bits, store.size);
+      andInto(out, store.live);
+      return out;
+    };
+  }
+  if (compiled.size >= MAX_COMPILED_FILTERS) compiled.clear();
+  compiled.set(key, result);
+  return result;
 }

@@ -345,7 +345,11 @@ function levenshtein(a: string, b: string, bound: number): number {
     const current = [i];
     let best = i;
     for (let j = 1; j <= b.length; j++) {
-      const cell = Math.min((previous[j] as number) + 1, (current[j - 1] as number) + 1, (previous[j - 1] as number) + (a[i - 1] === b[j - 1] ? 0 : 1));
+      const cell = Math.min(
+        (previous[j] as number) + 1,
+        (current[j - 1] as number) + 1,
+        (previous[j - 1] as number) + (a[i - 1] === b[j - 1] ? 0 : 1),
+      );
       current.push(cell);
       if (cell < best) best = cell;
     }

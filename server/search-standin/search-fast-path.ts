@@ -59,7 +59,9 @@ export function searchFastPath(state: StandinState, apiKey: string | undefined):
       }
       let body: unknown;
       try {
-        const text = Buffer.concat(chunks).toString('utf8').replace(/^\uFEFF/, '');
+        const text = Buffer.concat(chunks)
+          .toString('utf8')
+          .replace(/^\uFEFF/, '');
         body = text.length === 0 ? {} : JSON.parse(text);
       } catch (error) {
         const message = error instanceof Error ? error.message : 'Invalid request body.';

@@ -83,7 +83,7 @@ interface Derivation {
 /** Cached term lookups, bounded by count and by matched entries (15 bytes each). */
 const MAX_CACHED_TERMS = 256;
 const MAX_CACHED_ENTRIES = 3_000_000;
-const INITIAL_MATCH_CAPACITY = 64;
+const INITIAL_MATCH_CAPACITY = 1024;
 /** Entry maps (4 bytes per slot) are kept for at most this many cached terms of at least this many matches. */
 const MAX_KEPT_MAPS = 16;
 const KEPT_MAP_MIN_ENTRIES = 2048;
@@ -130,6 +130,18 @@ export class TextIndex {
   /** Entries in all lists, dead ones included: the size of a packing. */
   private postingCount = 0;
   private cachedEntries = 0;
+  /** Where lookUpTerm gathers entries (grown as needed, reused). */
+  private readonly matchBuffers: TermMatches = {
+    count: 0,
+    slots: new Int32Array(INITIAL_MATCH_CAPACITY),
+    typos: new Int8Array(INITIAL_MATCH_CAPACITY),
+    exact: new Uint8Array(INITIAL_MATCH_CAPACITY),
+    attributeRank: new Uint8Array(INITIAL_MATCH_CAPACITY),
+    score: new Float64Array(INITIAL_MATCH_CAPACITY),
+    wordIndexes: [],
+    wordList: [],
+    prefix: null,
+  };
   /** Slot -> entry index, -1 elsewhere: one while a term is collected, more while terms are joined. */
   private readonly scratch: Int32Array[] = [];
 
@@ -382,30 +394,21 @@ export class TextIndex {
     const { start, count: packedCount, packedLength, tail, slots, infos } = this.packedPostings();
     const lists = lexicon.lists;
     const seqOfSlot = this.seqBySlot;
-    let capacity = INITIAL_MATCH_CAPACITY;
-    const matches: TermMatches = {
-      count: 0,
-      slots: new Int32Array(capacity),
-      typos: new Int8Array(capacity),
-      exact: new Uint8Array(capacity),
-      attributeRank: new Uint8Array(capacity),
-      score: new Float64Array(capacity),
-      wordIndexes: [],
-      wordList,
-      prefix: asPrefix ? term : null,
-    };
+    // Entries are gathered in arrays kept from one lookup to the next, then copied out at their
+    // exact size: a lookup's result is cached, and growing arrays per lookup was garbage.
+    const matches: TermMatches = this.matchBuffers;
+    matches.count = 0;
+    matches.wordIndexes = [];
+    matches.wordList = wordList;
+    matches.prefix = asPrefix ? term : null;
+    let capacity = matches.slots.length;
     const grow = (): void => {
       capacity *= 2;
-      const grown = <A extends Int32Array | Int8Array | Uint8Array | Float64Array>(array: A, make: (size: number) => A): A => {
-        const bigger = make(capacity);
-        bigger.set(array);
-        return bigger;
-      };
-      matches.slots = grown(matches.slots, (size) => new Int32Array(size));
-      matches.typos = grown(matches.typos, (size) => new Int8Array(size));
-      matches.exact = grown(matches.exact, (size) => new Uint8Array(size));
-      matches.attributeRank = grown(matches.attributeRank, (size) => new Uint8Array(size));
-      matches.score = grown(matches.score, (size) => new Float64Array(size));
+      matches.slots = enlarged(matches.slots, capacity);
+      matches.typos = enlarged(matches.typos, capacity);
+      matches.exact = enlarged(matches.exact, capacity);
+      matches.attributeRank = enlarged(matches.attributeRank, capacity);
+      matches.score = enlarged(matches.score, capacity);
     };
     const entryOf = this.scratchMaps(1)[0] as Int32Array;
     const documentCount = Math.max(1, this.slotBySeq.size);
@@ -413,41 +416,49 @@ export class TextIndex {
     const lengthBySlot = this.lengthBySlot;
     const typoDisabledMask = this.typoDisabledMask;
 
+    // The word being collected: set by collect() for add(), one closure per lookup, not per word
+    // (closures are costly under tsx, which names each one as it is made).
+    let idf = 0;
+    let typoMask = -1;
+    let derivation: Derivation = { typos: 0, exact: true, prefix: false, weight: 1 };
+    let matchedAny = false;
+    const add = (slot: number, info: number): void => {
+      const mask = fieldMaskOf(info) & allowedMask & typoMask;
+      if (mask === 0) return;
+      matchedAny = true;
+      const frequency = frequencyOf(info);
+      const lengthRatio = (lengthBySlot[slot] as number) / averageLength;
+      const score = (derivation.weight * idf * frequency * (BM25_K1 + 1)) / (frequency + BM25_K1 * (1 - BM25_B + BM25_B * lengthRatio));
+      const rank = bestFieldRank(mask);
+      const entry = entryOf[slot] as number;
+      if (entry < 0) {
+        if (matches.count === capacity) grow();
+        const added = matches.count++;
+        entryOf[slot] = added;
+        matches.slots[added] = slot;
+        matches.typos[added] = derivation.typos;
+        matches.exact[added] = derivation.exact ? 1 : 0;
+        matches.attributeRank[added] = rank;
+        matches.score[added] = score;
+      } else {
+        if (derivation.typos < (matches.typos[entry] as number)) matches.typos[entry] = derivation.typos;
+        if (derivation.exact) matches.exact[entry] = 1;
+        if (rank < (matches.attributeRank[entry] as number)) matches.attributeRank[entry] = rank;
+        if (score > (matches.score[entry] as number)) matches.score[entry] = score;
+      }
+    };
+
     /** Adds the live documents of word `index`: its packed entries, then any appended since. */
-    const collect = (index: number, derivation: Derivation): void => {
+    const collect = (index: number, how: Derivation): void => {
       const from = start[index] as number;
       const to = from + (packedCount[index] as number);
       // The list's length, dead entries included, as the document frequency (as reads always did).
       const list = tail[index] === 1 ? (lists[index] as PostingList) : null;
       const documents = list ? list.slots.length : (packedLength[index] as number);
-      let matchedAny = false;
-      const idf = Math.log(1 + (documentCount - documents + 0.5) / (documents + 0.5));
-      const typoMask = derivation.typos > 0 ? ~typoDisabledMask : -1;
-      const add = (slot: number, info: number): void => {
-        const mask = fieldMaskOf(info) & allowedMask & typoMask;
-        if (mask === 0) return;
-        matchedAny = true;
-        const frequency = frequencyOf(info);
-        const lengthRatio = (lengthBySlot[slot] as number) / averageLength;
-        const score = (derivation.weight * idf * frequency * (BM25_K1 + 1)) / (frequency + BM25_K1 * (1 - BM25_B + BM25_B * lengthRatio));
-        const rank = bestFieldRank(mask);
-        const entry = entryOf[slot] as number;
-        if (entry < 0) {
-          if (matches.count === capacity) grow();
-          const added = matches.count++;
-          entryOf[slot] = added;
-          matches.slots[added] = slot;
-          matches.typos[added] = derivation.typos;
-          matches.exact[added] = derivation.exact ? 1 : 0;
-          matches.attributeRank[added] = rank;
-          matches.score[added] = score;
-        } else {
-          if (derivation.typos < (matches.typos[entry] as number)) matches.typos[entry] = derivation.typos;
-          if (derivation.exact) matches.exact[entry] = 1;
-          if (rank < (matches.attributeRank[entry] as number)) matches.attributeRank[entry] = rank;
-          if (score > (matches.score[entry] as number)) matches.score[entry] = score;
-        }
-      };
+      idf = Math.log(1 + (documentCount - documents + 0.5) / (documents + 0.5));
+      typoMask = how.typos > 0 ? ~typoDisabledMask : -1;
+      derivation = how;
+      matchedAny = false;
       for (let p = from; p < to; p++) {
         const slot = slots[p] as number;
         if ((seqOfSlot[slot] as number) >= 0) add(slot, infos[p] as number);
@@ -459,7 +470,7 @@ export class TextIndex {
         }
       }
       // Prefix matches are many (a short prefix can match 100,000 words) and highlight by `prefix`.
-      if (matchedAny && !derivation.prefix) matches.wordIndexes.push(index);
+      if (matchedAny && !how.prefix) matches.wordIndexes.push(index);
     };
 
     // A word starting with the term is found by the prefix lookup; other words may be proposed by
@@ -525,17 +536,25 @@ export class TextIndex {
     } finally {
       for (let i = 0; i < matches.count; i++) entryOf[matches.slots[i] as number] = -1;
     }
-    // Trimmed, so the cache holds no slack.
     const count = matches.count;
-    if (capacity > count + (count >>> 2)) {
-      matches.slots = matches.slots.slice(0, count);
-      matches.typos = matches.typos.slice(0, count);
-      matches.exact = matches.exact.slice(0, count);
-      matches.attributeRank = matches.attributeRank.slice(0, count);
-      matches.score = matches.score.slice(0, count);
-    }
-    return matches;
+    return {
+      count,
+      slots: matches.slots.slice(0, count),
+      typos: matches.typos.slice(0, count),
+      exact: matches.exact.slice(0, count),
+      attributeRank: matches.attributeRank.slice(0, count),
+      score: matches.score.slice(0, count),
+      wordIndexes: matches.wordIndexes,
+      wordList,
+      prefix: matches.prefix,
+    };
   }
+}
+
+function enlarged<A extends Int32Array | Int8Array | Uint8Array | Float64Array>(array: A, size: number): A {
+  const bigger = new (array.constructor as new (length: number) => A)(size);
+  bigger.set(array);
+  return bigger;
 }
 
 /** The words a query's terms matched, for highlighting. */

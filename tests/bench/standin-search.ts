@@ -76,7 +76,13 @@ function partDocument(i: number, random: () => number): PartDocument {
   const j = Math.floor(i / 2);
   const coil = kind === 'coil';
   const lo = 0.3 + random() * 0.6;
-  const [threadMm, reachMm, hexMm] = ([[14, 19, 16], [12, 26.5, 14], [10, 19, 16]] as const)[j % 3] as readonly [number, number, number];
+  const [threadMm, reachMm, hexMm] = (
+    [
+      [14, 19, 16],
+      [12, 26.5, 14],
+      [10, 19, 16],
+    ] as const
+  )[j % 3] as readonly [number, number, number];
   return {
     id: `part-${pad(i, 6)}`,
     brand: i % 3 === 0 ? 'Benchline' : pick(BRANDS),
@@ -136,7 +142,13 @@ export interface QueryType {
 }
 
 const TEXT_QUERIES = ['iridium spark plug', 'pencil coil', 'coil pack', 'platinum', 'copper plug'];
-const body = (q: string, filter: string[], facets: string[]): SearchBody => ({ q, filter: ['current = true', ...filter], facets, limit: 20, offset: 0 });
+const body = (q: string, filter: string[], facets: string[]): SearchBody => ({
+  q,
+  filter: ['current = true', ...filter],
+  facets,
+  limit: 20,
+  offset: 0,
+});
 const someCurrentPart = (k: number): number => {
   const i = (k * 7_919 + 13) % DOCUMENTS;
   return i % 100 === 98 ? i + 1 : i;
@@ -165,7 +177,8 @@ export const QUERY_TYPES: QueryType[] = [
   { name: 'spec: all current', make: () => body('', [], FACET_ATTRIBUTES), searches: 200 },
   {
     name: 'spec: kind + thread',
-    make: (k) => body('', ['kind = "plug"', `threadMm ${[14, 12, 10][k % 3]! - 0.005} TO ${[14, 12, 10][k % 3]! + 0.005}`], FACET_ATTRIBUTES),
+    make: (k) =>
+      body('', ['kind = "plug"', `threadMm ${[14, 12, 10][k % 3]! - 0.005} TO ${[14, 12, 10][k % 3]! + 0.005}`], FACET_ATTRIBUTES),
     searches: 200,
   },
   {
@@ -201,7 +214,8 @@ async function startStandinProcess(entry: string, nodeArgs: string[]): Promise<R
     child.stdout?.on('data', onData);
     child.once('exit', (code) => reject(new Error(`stand-in exited with ${code} before listening: ${seen}`)));
   });
-  child.stdout?.resume();
+  // Anything the stand-in prints later (errors, or --trace-gc through STANDIN_NODE_ARGS) is passed on.
+  child.stdout?.pipe(process.stdout);
   return {
     url,
     child,

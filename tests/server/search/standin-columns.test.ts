@@ -37,7 +37,8 @@ function randomDocument(random: () => number, id: number): JsonObject {
   if (heat < 0.5) doc.heat = 4 + Math.floor(random() * 6);
   else if (heat < 0.6) doc.heat = String(4 + Math.floor(random() * 6));
   else if (heat < 0.8) doc.heat = null;
-  if (random() < 0.8) doc.tags = Array.from({ length: Math.floor(random() * 4) }, () => pick(['Alder', 'alder', 'birch', 'Cedar', 'cedar ', 'elm']));
+  if (random() < 0.8)
+    doc.tags = Array.from({ length: Math.floor(random() * 4) }, () => pick(['Alder', 'alder', 'birch', 'Cedar', 'cedar ', 'elm']));
   const flag = random();
   doc.flag = flag < 0.4 ? true : flag < 0.7 ? false : flag < 0.8 ? 'true' : null;
   if (random() < 0.5) doc.nested = random() < 0.8 ? { a: Math.floor(random() * 5) / 2 } : {};
@@ -92,7 +93,8 @@ function referenceFacets(records: readonly DocumentRecord[], names: readonly str
     const order = settings.sortFacetValuesBy[name] ?? settings.sortFacetValuesBy['*'] ?? 'alpha';
     values.sort(order === 'count' ? (a, b) => b.count - a.count || alphaOrder(a, b) : alphaOrder);
     const distribution: Record<string, number> = {};
-    for (const value of values.slice(0, settings.maxValuesPerFacet)) distribution[value.label] = (distribution[value.label] ?? 0) + value.count;
+    for (const value of values.slice(0, settings.maxValuesPerFacet))
+      distribution[value.label] = (distribution[value.label] ?? 0) + value.count;
     facetDistribution[name] = distribution;
     if (min <= max) facetStats[name] = { min, max };
   }

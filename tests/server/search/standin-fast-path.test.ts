@@ -20,7 +20,9 @@ let expressUrl = '';
 let fastUrl = '';
 
 function listen(server: Server): Promise<string> {
-  return new Promise((resolve) => server.listen(0, '127.0.0.1', () => resolve(`http://127.0.0.1:${(server.address() as AddressInfo).port}`)));
+  return new Promise((resolve) =>
+    server.listen(0, '127.0.0.1', () => resolve(`http://127.0.0.1:${(server.address() as AddressInfo).port}`)),
+  );
 }
 
 const auth = { authorization: `Bearer ${API_KEY}` };
@@ -82,7 +84,11 @@ const json = (body: unknown, headers: Record<string, string> = auth): RequestIni
 });
 
 const CASES: Array<[string, string, RequestInit]> = [
-  ['text with filter and facets', '/indexes/parts/search', json({ q: 'spark plug', filter: ['current = true'], facets: ['kind', 'brand'], limit: 20 })],
+  [
+    'text with filter and facets',
+    '/indexes/parts/search',
+    json({ q: 'spark plug', filter: ['current = true'], facets: ['kind', 'brand'], limit: 20 }),
+  ],
   ['number with a typo', '/indexes/parts/search', json({ q: 'BLP000102', filter: 'current = true' })],
   ['placeholder with facets and stats', '/indexes/parts/search', json({ q: '', facets: ['brand', 'heat'], limit: 1 })],
   ['sort and pagination', '/indexes/parts/search', json({ q: '', sort: ['heat:desc'], page: 1, hitsPerPage: 2 })],

@@ -142,7 +142,9 @@ describe('stand-in lexicon fuzzy lookups', () => {
                   const typos = typosBetween(term, word, budget, asPrefix);
                   if (typos !== null) expected.push([word, typos]);
                 });
-                expect(found, `${term} around ${center}±${centerDistance}, budget ${budget}${asPrefix ? ', prefix' : ''}`).toEqual(expected);
+                expect(found, `${term} around ${center}±${centerDistance}, budget ${budget}${asPrefix ? ', prefix' : ''}`).toEqual(
+                  expected,
+                );
               }
             }
           }

@@ -71,7 +71,10 @@ function answers(index: StandinIndex): unknown[] {
 }
 
 function settle(index: StandinIndex): void {
-  index.updateSettings({ searchableAttributes: ['number', 'interchange', 'description', 'brand'], filterableAttributes: ['brand', 'current'] });
+  index.updateSettings({
+    searchableAttributes: ['number', 'interchange', 'description', 'brand'],
+    filterableAttributes: ['brand', 'current'],
+  });
 }
 
 describe('stand-in text index across writes', () => {
@@ -95,7 +98,10 @@ describe('stand-in text index across writes', () => {
       write(Array.from({ length: 40 }, (_, i) => partDocument(random, 3000 + round * 100 + i, round)));
       write(Array.from({ length: 25 }, () => partDocument(random, Math.floor(random() * 3000), round)));
       write(
-        Array.from({ length: 10 }, () => ({ id: `p${Math.floor(random() * 3000)}`, description: `${WORDS[round]} tower BLP0200${round}0` })),
+        Array.from({ length: 10 }, () => ({
+          id: `p${Math.floor(random() * 3000)}`,
+          description: `${WORDS[round]} tower BLP0200${round}0`,
+        })),
         'update',
       );
       const gone = Array.from({ length: 15 }, () => `p${Math.floor(random() * 3000)}`);
