@@ -386,7 +386,11 @@ export function runSearch(index: StandinIndex, request: SearchRequest): JsonObje
 
   const retrieve = retrievedAttributes(request, settings.displayedAttributes);
   const highlightAll = request.highlightAttributes?.includes('*') ?? false;
+  // A whole document with nothing added is answered as stored: it is only serialised, so the copy
+  // pickAttributes makes (a spread of every field, per hit) is not needed.
+  const asStored = retrieve === null && !request.formattedAttributes && !request.showRankingScore;
   const hits = ranked.slice(window.offset, window.end).map((candidate) => {
+    if (asStored) return candidate.record.doc;
     const hit = pickAttributes(candidate.record.doc, retrieve);
     if (request.formattedAttributes) {
       hit._formatted = formatHit(hit, request.highlightAttributes ? matchedWords : null, {

@@ -276,8 +276,9 @@ export class TextIndex {
     const start = new Int32Array(lists.length);
     const count = new Int32Array(lists.length);
     const packedLength = new Int32Array(lists.length);
-    const slots = new Int32Array(this.postingCount);
-    const infos = new Int32Array(this.postingCount);
+    // postingCount counts every entry appended, so this is enough; grown anyway if it were not.
+    let slots = new Int32Array(this.postingCount);
+    let infos = new Int32Array(this.postingCount);
     const seqOfSlot = this.seqBySlot;
     let at = 0;
     let remaining = 0;
@@ -285,6 +286,10 @@ export class TextIndex {
       start[k] = at;
       const listSlots = list.slots;
       const listInfos = list.infos;
+      if (at + listSlots.length > slots.length) {
+        slots = enlarged(slots, 2 * (at + listSlots.length));
+        infos = enlarged(infos, slots.length);
+      }
       for (let i = 0; i < listSlots.length; i++) {
         const slot = listSlots[i] as number;
         if ((seqOfSlot[slot] as number) < 0) continue;
@@ -452,9 +457,15 @@ export class TextIndex {
     const collect = (index: number, how: Derivation): void => {
       const from = start[index] as number;
       const to = from + (packedCount[index] as number);
-      // The list's length, dead entries included, as the document frequency (as reads always did).
       const list = tail[index] === 1 ? (lists[index] as PostingList) : null;
-      const documents = list ? list.slots.length : (packedLength[index] as number);
+      // Document frequency: the word's live documents, so a rewritten document's dead entries do
+      // not lower the word's weight (a freshly built index scores the same).
+      let documents = 0;
+      for (let p = from; p < to; p++) if ((seqOfSlot[slots[p] as number] as number) >= 0) documents++;
+      if (list) {
+        for (let i = packedLength[index] as number; i < list.slots.length; i++)
+          if ((seqOfSlot[list.slots[i] as number] as number) >= 0) documents++;
+      }
       idf = Math.log(1 + (documentCount - documents + 0.5) / (documents + 0.5));
       typoMask = how.typos > 0 ? ~typoDisabledMask : -1;
       derivation = how;

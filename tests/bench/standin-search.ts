@@ -4,7 +4,8 @@
  * `meilisearch` SDK, then searched over HTTP with the queries server/services/search.service.ts
  * sends: free text (filter `current = true`, facets kind and brand), number tokens (no facets),
  * spec searches (empty q, filters, all 11 facets). For every query type it prints p50/p95 of the
- * round trip with 1 client and with 20 concurrent clients, and the in-process engine time.
+ * round trip with 1 client and with 20 concurrent clients, then the engine's CPU time per search
+ * when called in-process.
  *
  * The stand-in runs in a child process of its own, so the load generator does not share its event
  * loop (it still shares the machine's cores, as the app would). Run with
@@ -14,6 +15,7 @@
  *   STANDIN_NODE_ARGS  extra node flags for the stand-in process, e.g. `--cpu-prof --cpu-prof-dir=/tmp/prof`
  *   BENCH_ONLY         comma-separated query types to run (default: all)
  *   BENCH_SCALE        multiplies the number of searches per type (default 1)
+ *   BENCH_ENGINE=0     skips the in-process engine timings that follow the HTTP figures
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { realpathSync } from 'node:fs';
@@ -291,7 +293,70 @@ function describe(samples: Sample[], seconds: number): string {
   );
 }
 
-/** Starts a stand-in process, indexes the documents, runs every query type and prints the figures. */
+interface EngineModules {
+  StandinIndex: new (
+    uid: string,
+    primaryKey: string | null,
+  ) => {
+    updateSettings(patch: Record<string, unknown>): void;
+    writeDocuments(documents: Record<string, unknown>[], mode: 'replace', primaryKey: string | null): number;
+  };
+  runSearch: (index: unknown, request: unknown) => unknown;
+  readSearchRequest: (body: unknown) => unknown;
+}
+
+/**
+ * The engine alone, in this process: the same documents and searches straight through runSearch
+ * (and JSON.stringify of the answer), timed as CPU per search — what a search costs the event loop
+ * that runs it, without HTTP or the load generator. Imports the stand-in next to `entry`.
+ */
+async function runEngineTimings(
+  entry: string,
+  documents: readonly PartDocument[],
+  only: string[] | undefined,
+  scale: number,
+): Promise<void> {
+  const dir = dirname(entry);
+  const modules = {
+    ...((await import(resolve(dir, 'standin-index.ts'))) as Pick<EngineModules, 'StandinIndex'>),
+    ...((await import(resolve(dir, 'search-engine.ts'))) as Pick<EngineModules, 'runSearch'>),
+    ...((await import(resolve(dir, 'search-request.ts'))) as Pick<EngineModules, 'readSearchRequest'>),
+  };
+  const index = new modules.StandinIndex(UID, 'id');
+  index.updateSettings({
+    searchableAttributes: SEARCHABLE_ATTRIBUTES,
+    filterableAttributes: FILTERABLE_ATTRIBUTES,
+    sortableAttributes: ['partNumber', 'onHand'],
+  });
+  for (let from = 0; from < documents.length; from += BATCH) {
+    // A copy, as the HTTP route hands over freshly parsed documents.
+    index.writeDocuments(JSON.parse(JSON.stringify(documents.slice(from, from + BATCH))) as Record<string, unknown>[], 'replace', 'id');
+  }
+  console.log('  engine alone (runSearch + JSON.stringify in one process, CPU time per search):');
+  for (const type of QUERY_TYPES) {
+    if (only && !only.includes(type.name)) continue;
+    const count = Math.max(CONCURRENCY, Math.round(type.searches * scale));
+    for (let k = 0; k < Math.min(40, count); k++) JSON.stringify(modules.runSearch(index, modules.readSearchRequest(type.make(k))));
+    const cpu: number[] = [];
+    const started = performance.now();
+    for (let k = 0; k < count && performance.now() - started < 10_000; k++) {
+      const body = type.make(k);
+      const before = process.cpuUsage();
+      JSON.stringify(modules.runSearch(index, modules.readSearchRequest(body)));
+      const used = process.cpuUsage(before);
+      cpu.push((used.user + used.system) / 1000);
+    }
+    cpu.sort((a, b) => a - b);
+    console.log(
+      `    ${type.name.padEnd(24)} p50 ${percentile(cpu, 50).toFixed(2).padStart(7)} ms  p95 ${percentile(cpu, 95).toFixed(2).padStart(7)} ms  (${cpu.length} searches)`,
+    );
+  }
+}
+
+/**
+ * Starts a stand-in process, indexes the documents, runs every query type over HTTP and prints
+ * the figures; then times the engine alone in this process (BENCH_ENGINE=0 skips that part).
+ */
 export async function runStandinBench(): Promise<void> {
   const entry = resolve(ROOT, process.env.STANDIN_ENTRY ?? 'server/search-standin/main.ts');
   const nodeArgs = (process.env.STANDIN_NODE_ARGS ?? '').split(/\s+/).filter(Boolean);
@@ -341,6 +406,7 @@ export async function runStandinBench(): Promise<void> {
   } finally {
     await standin.stop();
   }
+  if (process.env.BENCH_ENGINE !== '0') await runEngineTimings(entry, documents, only, scale);
 }
 
 const invokedDirectly = process.argv[1] !== undefined && realpathSync(process.argv[1]) === realpathSync(fileURLToPath(import.meta.url));
