@@ -261,7 +261,7 @@ export class TextIndex {
     return this.seqBySlot;
   }
 
-  /** Scores depend on the document count and lengths: any write drops every cached term. */
+  /** Scores depend on the document count and lengths: each write drops every cached term. */
   private forgetTerms(): void {
     if (this.termCache.size === 0) return;
     this.termCache.clear();

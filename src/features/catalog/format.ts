@@ -4,13 +4,10 @@
  * trade prints them in (shared/schemas/specs.ts), so nothing here converts, it only prints.
  */
 
-const usd = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
+import { formatCents } from '@shared/money';
 
-/** 4999 → "$49.99"; -500 → "-$5.00". */
-export function formatMoney(cents: number): string {
-  if (!Number.isInteger(cents)) throw new RangeError(`money must be whole cents, got ${cents}`);
-  return usd.format(cents / 100);
-}
+/** 4999 → "$49.99"; -500 → "-$5.00" — shared/money.ts is the one money printer, server and client. */
+export const formatMoney = (cents: number): string => formatCents(cents);
 
 /** The unit symbols a spec figure can carry. */
 export const UNITS = {

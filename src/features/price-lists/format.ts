@@ -3,16 +3,14 @@
  * integer cents.
  */
 
-const usd = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
+import { formatCents } from '@shared/money';
+
 const pct = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1, minimumFractionDigits: 1, signDisplay: 'exceptZero' });
 const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
 const count = new Intl.NumberFormat('en-US');
 
-/** 4999 → "$49.99". */
-export function formatMoney(cents: number): string {
-  if (!Number.isInteger(cents)) throw new RangeError(`money must be whole cents, got ${cents}`);
-  return usd.format(cents / 100);
-}
+/** 4999 → "$49.99", through the one money printer in shared/money.ts. */
+export const formatMoney = (cents: number): string => formatCents(cents);
 
 /** The move from one price to another in percent of the old one, or null when there is no old one. */
 export function percentChange(oldCents: number | null, newCents: number): number | null {

@@ -22,5 +22,5 @@ export const searchPartsQueryOptions = (kind: PartKind, q: string) =>
     staleTime: 30_000,
   });
 
-/** Parts of one kind for a picker: any brand's number or words, from two characters on. */
+/** Parts of one kind for a picker: a number of whichever brand, or words, from two characters on. */
 export const useSearchParts = (kind: PartKind, q: string) => useQuery(searchPartsQueryOptions(kind, q));
