@@ -11,5 +11,4 @@ if [ -z "${BENCH_DATABASE_URL:-}" ]; then
 fi
 export DATABASE_URL="$BENCH_DATABASE_URL"
 export TSX_TSCONFIG_PATH="$ROOT/tsconfig.json"
-npx tsx server/db/migrate.ts
 npx tsx tests/bench/run.ts

@@ -4,23 +4,15 @@ import { createApp } from '../../server/app';
 import { buildDeps } from '../../server/bootstrap';
 import { loadEnv } from '../../server/config/env';
 import { startLocalServices } from '../../server/local-services';
-import { seedAll } from '../../seed/seed-all';
-import { seedScale } from '../../seed/scale';
 
 /**
  * The app as `npm start` runs it, in a process of its own so that the load generator does not
- * share its event loop. Prints "READY <port> <documents> <ms>" once it serves.
+ * share its event loop; `npm run bench` has prepared its database. Prints "READY <port> <documents> <ms>" once it serves.
  */
 async function main(): Promise<void> {
   const local = await startLocalServices({ ...process.env, SMTP_URL: undefined, MEILI_HOST: undefined });
   const env = loadEnv({ ...process.env, ...local.env, PORT: '0', NODE_ENV: 'production', LOGIN_MAX_PER_ADDRESS: '1000' });
   const deps = await buildDeps(env);
-  await seedAll(deps.dataSource);
-  const scale = await seedScale(env.DATABASE_URL);
-  if (scale.parts)
-    console.error(
-      `  scale data generated: ${scale.parts} parts, ${scale.interchange} interchange rows in ${(scale.ms / 1000).toFixed(1)} s`,
-    );
   const t0 = Date.now();
   const indexed = await deps.search.rebuild(deps.dataSource);
   const server = createApp(deps).listen(0, '127.0.0.1', () => {

@@ -1,4 +1,5 @@
 import { runCompatRankBench } from './compat-rank';
+import { prepareBenchDatabase } from './prepare';
 import { runPriceListImportBench } from './price-list-import';
 import { runParseBench } from './price-list-parse';
 import { runSearchBench } from './search-bench';
@@ -9,6 +10,10 @@ const only = process.argv[2];
 const wanted = (name: string) => !only || only === name;
 
 async function main(): Promise<void> {
+  const url = process.env.DATABASE_URL;
+  if (!url) throw new Error('DATABASE_URL is not set (npm run bench sets it)');
+  console.log('== preparing the bench database (demo scenario and scale data, idempotent)');
+  await prepareBenchDatabase(url);
   if (wanted('compat')) {
     console.log('== compatibility ranking (in-process)');
     await runCompatRankBench();
@@ -18,8 +23,6 @@ async function main(): Promise<void> {
     await runParseBench();
   }
   if (wanted('import')) {
-    const url = process.env.DATABASE_URL;
-    if (!url) throw new Error('DATABASE_URL is not set (npm run bench sets it)');
     console.log('\n== price-list import end to end (parse, validate, stage, diff, commit) against psql \\copy');
     await runPriceListImportBench(url);
   }
