@@ -13,6 +13,7 @@ import { authRoutes } from './routes/auth.routes';
 import { catalogRoutes } from './routes/catalog.routes';
 import { compatRoutes } from './routes/compat.routes';
 import { fitReportRoutes } from './routes/fit-reports.routes';
+import { jobsRoutes } from './routes/jobs.routes';
 import { settingsRoutes } from './routes/settings.routes';
 import { priceListRoutes } from './routes/price-lists.routes';
 import { supplierRoutes } from './routes/suppliers.routes';
@@ -29,6 +30,7 @@ export function buildApiRouter(deps: AppDeps, csrf: ReturnType<typeof csrfProtec
   api.use(settingsRoutes(deps));
   api.use(supplierRoutes(deps));
   api.use(priceListRoutes(deps));
+  api.use(jobsRoutes(deps));
   return api;
 }
 

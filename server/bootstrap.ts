@@ -2,6 +2,7 @@ import pg from 'pg';
 import type { Env } from './config/env';
 import { createDataSource } from './db/data-source';
 import type { AppDeps } from './deps';
+import { JobQueue } from './jobs/queue';
 import { createMailer } from './mail/mailer';
 import { PartSearchIndex } from './search/search-index';
 
@@ -13,10 +14,14 @@ export async function buildDeps(env: Env): Promise<AppDeps> {
   if (!env.MEILI_HOST) throw new Error('MEILI_HOST is not set: start the local search stand-in first.');
   const mailer = createMailer(env.SMTP_URL, env.MAIL_FROM);
   const search = new PartSearchIndex(env.MEILI_HOST, env.MEILI_API_KEY, env.MEILI_INDEX);
-  return { env, dataSource, pool, mailer, search };
+  // Every process enqueues, so the queue's schema is made here; its workers start apart (startWorkers).
+  const jobs = new JobQueue({ env, dataSource, search, mailer });
+  await jobs.start();
+  return { env, dataSource, pool, mailer, search, jobs };
 }
 
 export async function closeDeps(deps: AppDeps): Promise<void> {
+  await deps.jobs.stop();
   deps.mailer.close();
   await deps.pool.end();
   await deps.dataSource.destroy();

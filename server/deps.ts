@@ -1,6 +1,7 @@
 import type pg from 'pg';
 import type { DataSource } from 'typeorm';
 import type { Env } from './config/env';
+import type { JobQueue } from './jobs/queue';
 import type { Mailer } from './mail/mailer';
 import type { PartSearchIndex } from './search/search-index';
 
@@ -12,4 +13,6 @@ export interface AppDeps {
   pool: pg.Pool;
   mailer: Mailer;
   search: PartSearchIndex;
+  /** Follow-up work after a commit (search index, mail), queued in PostgreSQL. */
+  jobs: JobQueue;
 }

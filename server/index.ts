@@ -14,6 +14,8 @@ async function main(): Promise<void> {
   const started = Date.now();
   const indexed = await deps.search.rebuild(deps.dataSource);
   console.log(`[arcwise] search index rebuilt from PostgreSQL: ${indexed} parts in ${Date.now() - started} ms`);
+  if (env.JOB_WORKERS) await deps.jobs.startWorkers();
+  console.log(`[arcwise] follow-up jobs ${env.JOB_WORKERS ? 'run in this process' : 'are only queued here (JOB_WORKERS=0)'}`);
   const app = createApp(deps);
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     console.log(`[arcwise] listening on http://localhost:${env.PORT}`);

@@ -22,6 +22,13 @@ const envSchema = z.object({
   LOGIN_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(30),
   LOGIN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
   STATIC_DIR: z.string().optional(),
+  /** 0: this process only enqueues follow-up jobs; another process works them. */
+  JOB_WORKERS: boolish.default(true),
+  /** Retries after the first attempt; the delay doubles each time (with jitter) from JOB_RETRY_DELAY_SECONDS. */
+  JOB_RETRY_LIMIT: z.coerce.number().int().min(0).default(6),
+  JOB_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).default(10),
+  /** How often an idle worker looks for due jobs (retries); new jobs wake it at once. pg-boss's floor is 0.5. */
+  JOB_POLL_SECONDS: z.coerce.number().min(0.5).default(2),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -24,7 +24,7 @@ const partQuerySchema = z.object({ engineId: z.string().uuid().optional() });
 export function catalogRoutes(deps: AppDeps): Router {
   const r = Router();
   const ds = deps.dataSource;
-  const edits = new CatalogEditService(ds, deps.search);
+  const edits = new CatalogEditService(ds, deps.jobs);
 
   mount(r, 'GET /api/vehicles/years', async (_req, res) => {
     res.json({ years: await listYears(ds) });

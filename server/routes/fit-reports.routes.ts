@@ -34,7 +34,7 @@ export function fitReportRoutes(deps: AppDeps): Router {
   mount(r, 'POST /api/fit-reports/:id/email', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const { to } = parseBody(emailFitReportBodySchema, req);
-    await reports().email(currentUser(req), id, to, deps.mailer);
+    await reports().email(currentUser(req), id, to, deps.jobs);
     res.status(202).json({ sent: true });
   });
 

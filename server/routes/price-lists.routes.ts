@@ -14,7 +14,7 @@ import { currentUser } from '../middleware/auth';
 import { parseBody, parseParams, parseQuery } from '../middleware/validate';
 import { commitPriceList } from '../services/price-list/commit';
 import { writeErrorsCsv } from '../services/price-list/errors-csv';
-import { followCommit } from '../services/price-list/follow-up';
+import { enqueueCommitFollowUp } from '../services/price-list/follow-up';
 import { discardPriceList, previewPriceList, uploadPriceList } from '../services/price-list/intake.service';
 import { getPriceList, listChanges, listPriceLists, listRowErrors } from '../services/price-list/queries';
 import { cleanFileName, receivePriceListUpload } from '../services/price-list/upload';
@@ -95,9 +95,9 @@ export function priceListRoutes(deps: AppDeps): Router {
 
   mount(r, 'POST /api/price-lists/:id/commit', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    const outcome = await commitPriceList(ds, id, currentUser(req).id);
-    const notices = await followCommit(deps, id, outcome);
-    res.json({ ...(await getPriceList(ds, id)), notices });
+    await commitPriceList(ds, id, currentUser(req).id, (m) => enqueueCommitFollowUp(m, deps.jobs, id));
+    // The search index and the buyers' e-mail are queued with the commit: nothing after it can fail the request.
+    res.json({ ...(await getPriceList(ds, id)), notices: [] });
   });
 
   mount(r, 'POST /api/price-lists/:id/discard', async (req, res) => {

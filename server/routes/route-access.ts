@@ -27,6 +27,8 @@ export const ROUTE_ACCESS = {
   'PATCH /api/users/:id': ADMIN,
   'GET /api/shops': ADMIN,
   'GET /api/outbox': ADMIN,
+  'GET /api/jobs': ADMIN,
+  'POST /api/jobs/:id/retry': ADMIN,
   'GET /api/vehicles/years': COUNTER,
   'GET /api/vehicles/makes': COUNTER,
   'GET /api/vehicles/models': COUNTER,

@@ -1,6 +1,5 @@
 import { Router } from 'express';
 import { idParamSchema, inviteBodySchema, updateUserBodySchema } from '../../shared/schemas/auth';
-import { appUrl } from '../config/env';
 import type { AppDeps } from '../deps';
 import { currentUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
@@ -19,7 +18,7 @@ export function usersRoutes(deps: AppDeps): Router {
 
   mount(r, 'POST /api/users/invite', async (req, res) => {
     const body = parseBody(inviteBodySchema, req);
-    const { user, expiresAt } = await inviteUser(ds, deps.mailer, appUrl(deps.env), currentUser(req).id, body);
+    const { user, expiresAt } = await inviteUser(ds, deps.jobs, currentUser(req).id, body);
     res.status(201).json({ user: presentTeamMember(user), expiresAt: expiresAt.toISOString() });
   });
 

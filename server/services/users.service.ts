@@ -1,15 +1,13 @@
-import { createHash, randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import { IsNull } from 'typeorm';
 import { INVITE_TTL_HOURS, type AcceptInviteBody, type InviteBody, type UpdateUserBody } from '../../shared/schemas/auth';
 import { InvitationEntity, ShopEntity, UserEntity } from '../entities';
 import { AppError } from '../errors';
-import { escapeHtml, type Mailer } from '../mail/mailer';
+import type { JobQueue } from '../jobs/queue';
 import { audit } from './audit.service';
 import { endSessionsOf } from './auth.service';
+import { inviteTokenHash, newInviteToken } from './invite-token';
 import { hashPassword } from './password';
-
-const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
 export async function listUsers(ds: DataSource): Promise<UserEntity[]> {
   return ds.getRepository(UserEntity).find({ relations: { shop: true }, order: { role: 'ASC', name: 'ASC' } });
@@ -20,17 +18,17 @@ export async function listShops(ds: DataSource): Promise<ShopEntity[]> {
 }
 
 /**
- * Creates the user without a password and e-mails a one-time link to set one. The token is sent
- * once and only its hash is stored, so a database reader cannot accept an invitation.
+ * Creates the user without a password and, in the same transaction, queues the e-mail with a
+ * one-time link to set one. The mail job issues the link's token (see invitation-mail.ts); until
+ * then the stored hash is of a token nobody holds. Only hashes are stored, so a database reader
+ * cannot accept an invitation.
  */
 export async function inviteUser(
   ds: DataSource,
-  mailer: Mailer,
-  appUrl: string,
+  jobs: JobQueue,
   actorId: string,
   body: InviteBody,
 ): Promise<{ user: UserEntity; expiresAt: Date }> {
-  const token = randomBytes(32).toString('base64url');
   const expiresAt = new Date(Date.now() + INVITE_TTL_HOURS * 3600 * 1000);
   const user = await ds.transaction(async (m) => {
     if (await m.findOneBy(UserEntity, { email: body.email })) {
@@ -42,7 +40,10 @@ export async function inviteUser(
       UserEntity,
       m.create(UserEntity, { email: body.email, name: body.name, role: body.role, shopId, passwordHash: null }),
     );
-    await m.insert(InvitationEntity, { userId: created.id, tokenHash: sha256(token), expiresAt, invitedBy: actorId });
+    const invitation = await m.save(
+      InvitationEntity,
+      m.create(InvitationEntity, { userId: created.id, tokenHash: inviteTokenHash(newInviteToken()), expiresAt, invitedBy: actorId }),
+    );
     await audit(m, {
       actorId,
       action: 'user.invite',
@@ -50,20 +51,14 @@ export async function inviteUser(
       entityId: created.id,
       data: { email: body.email, role: body.role },
     });
+    await jobs.enqueue(m, 'mail.send', { kind: 'invitation', invitationId: invitation.id });
     return created;
-  });
-  const link = `${appUrl}/accept-invite?token=${encodeURIComponent(token)}`;
-  await mailer.send({
-    to: body.email,
-    subject: 'You are invited to Arcwise',
-    text: `Hello ${body.name},\n\nyou have been invited to Arcwise as ${body.role}. Set your password here (the link works once, for ${INVITE_TTL_HOURS} hours):\n\n${link}\n`,
-    html: `<p>Hello ${escapeHtml(body.name)},</p><p>you have been invited to Arcwise as <b>${escapeHtml(body.role)}</b>. Set your password here (the link works once, for ${INVITE_TTL_HOURS} hours):</p><p><a href="${escapeHtml(link)}">${escapeHtml(link)}</a></p>`,
   });
   return { user, expiresAt };
 }
 
 async function findOpenInvitation(ds: DataSource, token: string): Promise<InvitationEntity> {
-  const inv = await ds.getRepository(InvitationEntity).findOneBy({ tokenHash: sha256(token), usedAt: IsNull() });
+  const inv = await ds.getRepository(InvitationEntity).findOneBy({ tokenHash: inviteTokenHash(token), usedAt: IsNull() });
   if (!inv || inv.expiresAt.getTime() < Date.now()) {
     throw new AppError(400, 'bad_request', 'This invitation link is invalid, used or expired. Ask an admin for a new one.');
   }

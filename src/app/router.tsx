@@ -6,6 +6,7 @@ import { CatalogPage } from './routes/catalog/catalog';
 import { ComparePage } from './routes/compare/compare';
 import { FitReportPage } from './routes/fit-reports/fit-report';
 import { FitReportsPage } from './routes/fit-reports/fit-reports';
+import { JobsPage } from './routes/jobs/jobs';
 import { SettingsPage } from './routes/settings/settings';
 import { SharedFitReportPage } from './routes/shared/shared-fit-report';
 import { SignInPage } from './routes/auth/sign-in';
@@ -36,6 +37,7 @@ export const router = createBrowserRouter([
       { path: 'catalog', element: <CatalogPage /> },
       { path: 'team', element: <TeamPage /> },
       { path: 'outbox', element: <OutboxPage /> },
+      { path: 'jobs', element: <JobsPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

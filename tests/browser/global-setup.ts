@@ -42,6 +42,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   await deps.dataSource.runMigrations({ transaction: 'each' });
   await seedAll(deps.dataSource);
   await deps.search.rebuild(deps.dataSource);
+  await deps.jobs.startWorkers();
   const app = createApp(deps);
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));

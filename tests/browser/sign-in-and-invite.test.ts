@@ -42,6 +42,15 @@ describe('journey 7: sign-in and team', () => {
     await s.page.getByRole('cell', { name: email }).waitFor();
     await s.shot('admin-team');
 
+    // Beside the Outbox, the Jobs page: follow-up work that did not go through at once, if any.
+    await s.page.getByRole('link', { name: 'Jobs' }).click();
+    await s.page.getByRole('heading', { name: 'Jobs' }).waitFor();
+    await s.page
+      .getByText(/Nothing is waiting or failed|Retry|retrying at/)
+      .first()
+      .waitFor();
+    await s.shot('admin-jobs');
+
     await s.page.getByRole('link', { name: 'Outbox' }).click();
     const message = s.page.getByRole('button', { name: new RegExp(`to ${email.replace('.', '\\.')}`) });
     await message.waitFor({ timeout: 15000 });

@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import type { TestProject } from 'vitest/node';
 import { loadEnv } from '../../server/config/env';
 import { createDataSource } from '../../server/db/data-source';
+import { installJobQueue } from '../../server/jobs/queue';
 import { startMailCatcher } from '../../server/mail/catcher';
 import { PartSearchIndex } from '../../server/search/search-index';
 import { startSearchStandin } from '../../server/search-standin/server';
@@ -18,9 +19,9 @@ declare module 'vitest' {
 }
 
 /**
- * Once per run: migrate the test database (npm test made it fresh), seed the demo scenario, and
- * start the real local services on loopback — the mail catcher and the search stand-in — and
- * build the search index from PostgreSQL.
+ * Once per run: migrate the test database (npm test made it fresh), seed the demo scenario, install
+ * the job queue's schema, start the real local services on loopback — the mail catcher and the
+ * search stand-in — and build the search index from PostgreSQL.
  */
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
   const databaseUrl = process.env.TEST_DATABASE_URL ?? process.env.DATABASE_URL;
@@ -29,6 +30,8 @@ export default async function setup(project: TestProject): Promise<() => Promise
   const ds = await createDataSource(env.DATABASE_URL).initialize();
   await ds.runMigrations({ transaction: 'each' });
   await seedAll(ds);
+  // pg-boss's schema, once, before the test files' apps start their queues.
+  await installJobQueue(databaseUrl);
 
   // A real Meilisearch when MEILI_HOST is set, else the project's stand-in.
   const standin = process.env.MEILI_HOST ? null : await startSearchStandin({ port: 0 });

@@ -13,7 +13,11 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-/** The real app on the real test database and the real mail catcher; only listening is left to supertest. */
+/**
+ * The real app on the real test database and the real mail catcher, with its job workers running
+ * as in `npm start`; only listening is left to supertest. Retries come after a second or two
+ * (the policy's backoff from a shorter first delay) so a test can watch one happen.
+ */
 export async function createTestApp(overrides: Partial<Record<keyof Env, string>> = {}): Promise<TestApp> {
   const env = loadEnv({
     ...process.env,
@@ -26,9 +30,12 @@ export async function createTestApp(overrides: Partial<Record<keyof Env, string>
     MEILI_INDEX: 'parts',
     APP_URL: 'http://localhost:3999',
     SESSION_SECRET: 'arcwise-test-secret-0123456789',
+    JOB_RETRY_DELAY_SECONDS: '1',
+    JOB_POLL_SECONDS: '0.5',
     ...overrides,
   });
   const deps = await buildDeps(env);
+  if (env.JOB_WORKERS) await deps.jobs.startWorkers();
   return { app: createApp(deps), deps, close: () => closeDeps(deps) };
 }
 

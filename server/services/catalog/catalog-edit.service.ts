@@ -3,7 +3,7 @@ import { normalizePartNumber } from '../../../shared/part-number';
 import type { CreateBrandBody, CreateInterchangeBody, CreatePartBody, UpdatePartBody } from '../../../shared/schemas/catalog';
 import type { CoilSpec, PlugSpec } from '../../../shared/schemas/specs';
 import { AppError } from '../../errors';
-import type { PartSearchIndex } from '../../search/search-index';
+import type { JobQueue } from '../../jobs/queue';
 import { audit } from '../audit.service';
 
 const brandNorm = (name: string) => name.trim().toLowerCase();
@@ -76,11 +76,15 @@ export async function writePlugSpec(m: EntityManager, partId: string, s: PlugSpe
   );
 }
 
-/** Catalog edits: each in one transaction with its audit row, then the search index follows. */
+/**
+ * Catalog edits: each in one transaction with its audit row and the job that refreshes the search
+ * index for the parts it touched, so the index follows every committed edit (retried while the
+ * search service is down) and never fails the edit itself.
+ */
 export class CatalogEditService {
   constructor(
     private readonly ds: DataSource,
-    private readonly search: PartSearchIndex,
+    private readonly jobs: JobQueue,
   ) {}
 
   async createBrand(actorId: string, body: CreateBrandBody): Promise<{ id: string; name: string }> {
@@ -125,14 +129,14 @@ export class CatalogEditService {
         entityId: partId,
         data: { partNumber: body.partNumber, brand: body.brand },
       });
+      await this.jobs.enqueue(m, 'search.refresh', { partIds: [partId] });
       return partId;
     });
-    await this.search.refresh(this.ds, [id]);
     return id;
   }
 
   async updatePart(actorId: string, id: string, body: UpdatePartBody): Promise<void> {
-    const touched = await this.ds.transaction(async (m) => {
+    await this.ds.transaction(async (m) => {
       const rows = (await m.query(`SELECT id, kind, brand_id, superseded_by_id FROM part WHERE id = $1 FOR UPDATE`, [id])) as {
         id: string;
         kind: 'coil' | 'plug';
@@ -174,9 +178,9 @@ export class CatalogEditService {
         await writePlugSpec(m, id, body.plug);
       }
       await audit(m, { actorId, action: 'part.update', entityType: 'part', entityId: id, data: { fields: Object.keys(body) } });
-      return [id, part.superseded_by_id, body.supersededById].filter((x): x is string => !!x);
+      const touched = [id, part.superseded_by_id, body.supersededById].filter((x): x is string => !!x);
+      await this.jobs.enqueue(m, 'search.refresh', { partIds: touched });
     });
-    await this.search.refresh(this.ds, touched);
   }
 
   async createInterchange(actorId: string, body: CreateInterchangeBody): Promise<string> {
@@ -188,9 +192,9 @@ export class CatalogEditService {
         [body.brand, body.number, normalizePartNumber(body.number), body.partId, body.source, body.confidence],
       )) as { id: string }[];
       await audit(m, { actorId, action: 'interchange.create', entityType: 'interchange', entityId: rows[0]!.id, data: { ...body } });
+      await this.jobs.enqueue(m, 'search.refresh', { partIds: [body.partId] });
       return rows[0]!.id;
     });
-    await this.search.refresh(this.ds, [body.partId]);
     return id;
   }
 }

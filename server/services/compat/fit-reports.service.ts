@@ -4,7 +4,8 @@ import { checkLabel, type CompatSettings } from '../../../shared/compat';
 import type { User } from '../../../shared/schemas/auth';
 import { CAUTIONS, type CompatResult, type FitReport, type FitReportBody } from '../../../shared/schemas/compat';
 import { AppError } from '../../errors';
-import { escapeHtml, type Mailer } from '../../mail/mailer';
+import type { JobQueue } from '../../jobs/queue';
+import { escapeHtml, type OutgoingMail } from '../../mail/mailer';
 import { audit } from '../audit.service';
 import { compareCoilRequest, comparePlugRequest } from './compare.service';
 
@@ -121,22 +122,33 @@ export class FitReportService {
     return present(rows[0], this.appUrl);
   }
 
-  async email(user: User, id: string, to: string, mailer: Mailer): Promise<void> {
-    const report = await this.get(user, id);
-    const rows = report.result.checks.map((c) => `  ${c.verdict.toUpperCase().padEnd(6)} ${checkLabel(c.id)}: ${c.reason}`).join('\n');
+  /** Checks the sender may see the report, then queues the e-mail with its audit row. */
+  async email(user: User, id: string, to: string, jobs: JobQueue): Promise<void> {
+    await this.get(user, id);
+    await this.ds.transaction(async (m) => {
+      await audit(m, { actorId: user.id, action: 'fit-report.email', entityType: 'fit_report', entityId: id, data: { to } });
+      await jobs.enqueue(m, 'mail.send', { kind: 'fit-report', fitReportId: id, to, senderId: user.id });
+    });
+  }
+
+  /** The message, rendered by the mail job from PostgreSQL (the sender's right to it was checked when it was queued). */
+  async mail(id: string, senderId: string, to: string): Promise<OutgoingMail> {
+    const rows = (await this.ds.query(`${SELECT} WHERE r.id = $1`, [id])) as FitReportRow[];
+    const senders = (await this.ds.query(`SELECT name FROM "user" WHERE id = $1`, [senderId])) as { name: string }[];
+    if (!rows[0] || !senders[0]) throw new Error(`fit report ${id} or its sender ${senderId} is gone`);
+    const report = present(rows[0], this.appUrl);
+    const sender = senders[0].name;
+    const lines = report.result.checks.map((c) => `  ${c.verdict.toUpperCase().padEnd(6)} ${checkLabel(c.id)}: ${c.reason}`).join('\n');
     const htmlRows = report.result.checks
       .map(
         (c) => `<tr><td><b>${escapeHtml(c.verdict)}</b></td><td>${escapeHtml(checkLabel(c.id))}</td><td>${escapeHtml(c.reason)}</td></tr>`,
       )
       .join('');
-    await mailer.send({
+    return {
       to,
       subject: `Fit report: ${report.title} — ${report.verdict}`,
-      text: `${user.name} sent you a fit report from Arcwise.\n\n${report.title}\nOverall verdict: ${report.verdict}\n\n${rows}\n\nOpen it: ${report.shareUrl}\n\n${CAUTIONS.join('\n')}\n`,
-      html: `<p>${escapeHtml(user.name)} sent you a fit report from Arcwise.</p><h2>${escapeHtml(report.title)}</h2><p>Overall verdict: <b>${escapeHtml(report.verdict)}</b></p><table>${htmlRows}</table><p><a href="${escapeHtml(report.shareUrl)}">${escapeHtml(report.shareUrl)}</a></p><p><small>${CAUTIONS.map(escapeHtml).join('<br>')}</small></p>`,
-    });
-    await this.ds.transaction((m) =>
-      audit(m, { actorId: user.id, action: 'fit-report.email', entityType: 'fit_report', entityId: id, data: { to } }),
-    );
+      text: `${sender} sent you a fit report from Arcwise.\n\n${report.title}\nOverall verdict: ${report.verdict}\n\n${lines}\n\nOpen it: ${report.shareUrl}\n\n${CAUTIONS.join('\n')}\n`,
+      html: `<p>${escapeHtml(sender)} sent you a fit report from Arcwise.</p><h2>${escapeHtml(report.title)}</h2><p>Overall verdict: <b>${escapeHtml(report.verdict)}</b></p><table>${htmlRows}</table><p><a href="${escapeHtml(report.shareUrl)}">${escapeHtml(report.shareUrl)}</a></p><p><small>${CAUTIONS.map(escapeHtml).join('<br>')}</small></p>`,
+    };
   }
 }

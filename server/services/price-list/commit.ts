@@ -167,7 +167,13 @@ export interface CommitOutcome {
   applied: PriceListApplied;
 }
 
-export async function commitPriceList(ds: DataSource, listId: string, actorId: string | null): Promise<CommitOutcome> {
+/** `followUp` runs last inside the transaction: the caller queues there what must exist exactly when the commit does. */
+export async function commitPriceList(
+  ds: DataSource,
+  listId: string,
+  actorId: string | null,
+  followUp?: (m: EntityManager) => Promise<void>,
+): Promise<CommitOutcome> {
   return ds.transaction(async (m) => {
     await lockListOrRefuse(m, listId);
     const peek = (await m.query(`SELECT supplier_id FROM price_list WHERE id = $1`, [listId])) as { supplier_id: string }[];
@@ -220,6 +226,7 @@ export async function commitPriceList(ds: DataSource, listId: string, actorId: s
       entityId: listId,
       data: { supplierId, fileName: list.file_name, sha256: list.sha256, counts, applied },
     });
+    if (followUp) await followUp(m);
     return { supplierId, counts, applied };
   });
 }

@@ -18,6 +18,8 @@ interface FlaggedMove {
 }
 
 interface ListFacts {
+  counts: PriceListCounts;
+  applied: PriceListApplied;
   supplier_name: string;
   file_name: string;
   sha256: string;
@@ -29,26 +31,29 @@ interface ListFacts {
 const pct = (v: number | null): string => (v === null ? '—' : `${v > 0 ? '+' : ''}${v.toFixed(1)} %`);
 
 /** Every buyer who can sign in: the people who keep supplier prices. */
-export async function buyerEmails(ds: DataSource): Promise<string[]> {
+async function buyerEmails(ds: DataSource): Promise<string[]> {
   const rows = (await ds.query(`SELECT email FROM "user" WHERE role = 'buyer' AND NOT disabled ORDER BY email`)) as { email: string }[];
   return rows.map((r) => r.email);
 }
 
-export async function summaryMail(
-  ds: DataSource,
-  listId: string,
-  counts: PriceListCounts,
-  applied: PriceListApplied,
-  link: string,
-): Promise<Omit<OutgoingMail, 'to'>> {
+/**
+ * The summary of a committed list for the buyers, rendered by the mail job from what the commit
+ * stored; null when no buyer can sign in.
+ */
+export async function priceListSummaryMail(ds: DataSource, listId: string, link: string): Promise<OutgoingMail | null> {
+  const to = await buyerEmails(ds);
+  if (to.length === 0) return null;
   const facts = (
     (await ds.query(
-      `SELECT s.name AS supplier_name, pl.file_name, pl.sha256, u.name AS committed_by_name, pl.flagged, pl.flag_threshold_pct
-         FROM price_list pl JOIN supplier s ON s.id = pl.supplier_id LEFT JOIN "user" u ON u.id = pl.committed_by WHERE pl.id = $1`,
+      `SELECT pl.counts, pl.applied, s.name AS supplier_name, pl.file_name, pl.sha256, u.name AS committed_by_name, pl.flagged,
+              pl.flag_threshold_pct
+         FROM price_list pl JOIN supplier s ON s.id = pl.supplier_id LEFT JOIN "user" u ON u.id = pl.committed_by
+        WHERE pl.id = $1 AND pl.status = 'committed'`,
       [listId],
     )) as ListFacts[]
   )[0];
-  if (!facts) throw new Error(`price list ${listId} vanished after its commit`);
+  if (!facts) throw new Error(`price list ${listId} is not committed`);
+  const { counts, applied } = facts;
   const moves = (await ds.query(
     `SELECT part_number, brand, old_cost_cents, cost_cents, old_list_cents, list_cents, cost_change_pct, list_change_pct
        FROM price_list_row WHERE price_list_id = $1 AND flagged ORDER BY greatest(abs(cost_change_pct), abs(list_change_pct)) DESC, line LIMIT $2`,
@@ -83,5 +88,5 @@ export async function summaryMail(
     `<p>${escapeHtml(lines[0] ?? '')}</p><p>${escapeHtml(lines[2] ?? '')}<br>${escapeHtml(lines[3] ?? '')}</p>` +
     (rows ? `<table><tr><th>Part</th><th>Cost</th><th></th><th>List</th><th></th></tr>${rows}</table>` : '') +
     `<p>File SHA-256: <code>${escapeHtml(facts.sha256)}</code><br><a href="${escapeHtml(link)}">Open the price list</a></p>`;
-  return { subject, text: lines.join('\n'), html };
+  return { to, subject, text: lines.join('\n'), html };
 }

@@ -1,0 +1,41 @@
+import type { DataSource } from 'typeorm';
+import { z } from 'zod';
+import { JOB_NAMES, jobNameSchema, jobStateSchema } from '../../shared/schemas/jobs';
+import { JOB_SCHEMA } from '../jobs/queue';
+
+/** How many problem jobs the Jobs page lists, newest first. */
+const LIST_LIMIT = 200;
+
+const jobRowSchema = z.object({
+  id: z.string().uuid(),
+  name: jobNameSchema,
+  state: jobStateSchema,
+  data: z.unknown(),
+  retry_count: z.number().int(),
+  retry_limit: z.number().int(),
+  created_on: z.date(),
+  started_on: z.date().nullable(),
+  start_after: z.date(),
+  completed_on: z.date().nullable(),
+  last_error: z.string().nullable(),
+});
+export type JobRow = z.infer<typeof jobRowSchema>;
+
+// pg-boss stores a handler's error serialised ({ message, stack }), and its own as { value }.
+const SELECT = `SELECT id, name, state::text AS state, data, retry_count, retry_limit, created_on, started_on, start_after, completed_on,
+                       coalesce(output->>'message', output->'value'->>'message', output->>'value') AS last_error
+                  FROM ${JOB_SCHEMA}.job`;
+
+/** Our jobs that are waiting for another attempt or out of attempts, read from pg-boss's job table. */
+export async function listProblemJobs(ds: DataSource): Promise<JobRow[]> {
+  const rows: unknown = await ds.query(
+    `${SELECT} WHERE state IN ('retry', 'failed') AND name = ANY($1) ORDER BY created_on DESC, id LIMIT $2`,
+    [JOB_NAMES, LIST_LIMIT],
+  );
+  return z.array(jobRowSchema).parse(rows);
+}
+
+export async function findProblemJob(ds: DataSource, id: string): Promise<JobRow | null> {
+  const rows: unknown = await ds.query(`${SELECT} WHERE id = $1 AND state IN ('retry', 'failed') AND name = ANY($2)`, [id, JOB_NAMES]);
+  return z.array(jobRowSchema).parse(rows)[0] ?? null;
+}

@@ -1,0 +1,3 @@
+export const jobsKeys = {
+  all: ['jobs'] as const,
+};
