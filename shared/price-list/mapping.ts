@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from '../schemas/text';
 import { FIELD_LABELS, HEADER_SYNONYMS, PRICE_LIST_FIELDS, PRICE_LIST_LIMITS, REQUIRED_FIELDS, type PriceListField } from './fields';
 
 /**
@@ -7,7 +8,7 @@ import { FIELD_LABELS, HEADER_SYNONYMS, PRICE_LIST_FIELDS, PRICE_LIST_LIMITS, RE
  * itself digits wins over the index reading. `null` leaves a column unused.
  */
 export const mappingSchema = z
-  .record(z.string().max(PRICE_LIST_LIMITS.maxHeaderChars), z.enum(PRICE_LIST_FIELDS).nullable())
+  .record(text({ max: PRICE_LIST_LIMITS.maxHeaderChars, trim: false }), z.enum(PRICE_LIST_FIELDS).nullable())
   .refine((m) => Object.keys(m).length <= PRICE_LIST_LIMITS.maxColumns, {
     message: `at most ${PRICE_LIST_LIMITS.maxColumns} columns`,
   });

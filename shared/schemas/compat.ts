@@ -1,6 +1,10 @@
 import { z } from 'zod';
+import { uuidSchema } from './common';
 import { coilSpecSchema, engineSpecSchema, resolvedPlugSpecSchema } from './specs';
-import { uuidSchema } from './catalog';
+
+/** Compare: an original against a substitute, coil or plug, on an engine (compat-model.md). */
+
+// ---------- requests ----------
 
 /** A coil or plug given by its part in the catalog, or by a spec typed in (a part we do not stock, a measured coil). */
 export const coilRefSchema = z.union([z.object({ partId: uuidSchema }).strict(), z.object({ spec: coilSpecSchema }).strict()]);
@@ -22,6 +26,8 @@ export const plugCompareBodySchema = z.object({
 });
 export type PlugCompareBody = z.infer<typeof plugCompareBodySchema>;
 
+// ---------- responses ----------
+
 export const VERDICTS = ['go', 'review', 'no-go'] as const;
 export const verdictSchema = z.enum(VERDICTS);
 
@@ -34,6 +40,17 @@ export const checkSchema = z.object({
   reason: z.string(),
 });
 export type CheckRow = z.infer<typeof checkSchema>;
+
+/**
+ * A claim of equivalence judged: the foreign part's own spec against ours, on the engine named.
+ * `concerns` are the checks that are not go, with their reasons.
+ */
+export const interchangeCheckSchema = z.object({
+  verdict: verdictSchema,
+  concerns: z.array(checkSchema.pick({ id: true, verdict: true, reason: true })),
+  engine: z.string(),
+});
+export type InterchangeCheck = z.infer<typeof interchangeCheckSchema>;
 
 export const loadPointSchema = z.object({
   name: z.enum(['idle', 'cruise', 'full', 'boost']),
@@ -48,8 +65,10 @@ export const loadPointSchema = z.object({
 const currentSampleSchema = z.object({ tMs: z.number(), amps: z.number() });
 const curvePairSchema = z.object({ original: z.array(currentSampleSchema), substitute: z.array(currentSampleSchema) });
 
-export const sideLabelSchema = z.object({ label: z.string(), partId: z.string().nullable() });
+export const sideLabelSchema = z.object({ label: z.string(), partId: uuidSchema.nullable() });
+export type SideLabel = z.infer<typeof sideLabelSchema>;
 
+/** POST /api/compat/coil and /api/compat/plug; also the `result` of a fit report. */
 export const compatResultSchema = z.object({
   kind: z.enum(['coil', 'plug']),
   verdict: verdictSchema,
@@ -67,68 +86,10 @@ export const compatResultSchema = z.object({
   crankingDwellMs: z.number().optional(),
   original: sideLabelSchema,
   substitute: sideLabelSchema,
-  engine: z.object({ label: z.string(), engineId: z.string().nullable() }),
+  engine: z.object({ label: z.string(), engineId: uuidSchema.nullable() }),
   cautions: z.array(z.string()),
 });
 export type CompatResult = z.infer<typeof compatResultSchema>;
-
-export const alternatesQuerySchema = z.object({
-  kind: z.enum(['coil', 'plug']),
-  all: z.enum(['1', 'true', '0', 'false']).optional(),
-});
-
-export const benchBodySchema = z.union([
-  z.object({
-    partId: uuidSchema,
-    measured: z.object({
-      primaryOhm: z.number().min(0).nullable(),
-      secondaryKohm: z.number().min(0).nullable().optional(),
-      temperatureC: z.number().min(-40).max(150),
-    }),
-  }),
-  z.object({
-    spec: coilSpecSchema,
-    measured: z.object({
-      primaryOhm: z.number().min(0).nullable(),
-      secondaryKohm: z.number().min(0).nullable().optional(),
-      temperatureC: z.number().min(-40).max(150),
-    }),
-  }),
-]);
-export type BenchBody = z.infer<typeof benchBodySchema>;
-
-export const fitReportBodySchema = z.discriminatedUnion('kind', [
-  z.object({
-    kind: z.literal('coil'),
-    title: z.string().trim().max(120).optional(),
-    notes: z.string().max(2000).optional(),
-    inputs: coilCompareBodySchema,
-  }),
-  z.object({
-    kind: z.literal('plug'),
-    title: z.string().trim().max(120).optional(),
-    notes: z.string().max(2000).optional(),
-    inputs: plugCompareBodySchema,
-  }),
-]);
-export type FitReportBody = z.infer<typeof fitReportBodySchema>;
-
-export const fitReportSchema = z.object({
-  id: z.string(),
-  kind: z.enum(['coil', 'plug']),
-  title: z.string(),
-  notes: z.string(),
-  verdict: verdictSchema,
-  createdAt: z.string(),
-  createdBy: z.string(),
-  shopName: z.string().nullable(),
-  inputs: z.unknown(),
-  result: compatResultSchema,
-  shareUrl: z.string(),
-});
-export type FitReport = z.infer<typeof fitReportSchema>;
-
-export const emailFitReportBodySchema = z.object({ to: z.string().trim().toLowerCase().pipe(z.email()) });
 
 /** The cautions of the product, shown on Compare, Bench test and every fit report. */
 export const CAUTIONS = [

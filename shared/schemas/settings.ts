@@ -19,3 +19,10 @@ export const settingsSchema = z.object({ compat: compatSettingsSchema, priceList
 export type Settings = z.infer<typeof settingsSchema>;
 
 export const DEFAULT_SETTINGS: Settings = { compat: DEFAULT_COMPAT_SETTINGS, priceList: DEFAULT_PRICE_LIST_SETTINGS };
+
+/** GET and PUT /api/settings. */
+export const settingsResponseSchema = z.object({ settings: settingsSchema });
+export type SettingsResponse = z.infer<typeof settingsResponseSchema>;
+
+export const updateSettingsBodySchema = settingsResponseSchema;
+export type UpdateSettingsBody = z.infer<typeof updateSettingsBodySchema>;

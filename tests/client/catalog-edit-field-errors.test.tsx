@@ -3,7 +3,7 @@ import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-li
 import { MemoryRouter, Outlet, Route, Routes } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { User } from '@shared/schemas/auth';
-import type { PartSummary } from '@shared/schemas/catalog';
+import type { PartSummary } from '@shared/schemas/parts';
 import { CatalogPage } from '@/app/routes/catalog/catalog';
 
 // Fixtures shaped as the API answers them; the page parses every answer with its schemas.

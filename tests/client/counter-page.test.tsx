@@ -4,7 +4,7 @@ import { MemoryRouter, Outlet, Route, Routes } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '@shared/roles';
 import type { User } from '@shared/schemas/auth';
-import type { PartSummary } from '@shared/schemas/catalog';
+import type { PartSummary } from '@shared/schemas/parts';
 import { CounterPage } from '@/app/routes/counter/counter';
 
 // Fixtures shaped as the API answers (the client parses every answer with the shared schemas).

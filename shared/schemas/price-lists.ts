@@ -1,54 +1,8 @@
 import { z } from 'zod';
 import { mappingSchema } from '../price-list/mapping';
-import { emailSchema } from './auth';
+import { limitQuerySchema, offsetQuerySchema, timestampSchema, uuidSchema } from './common';
 
-/**
- * Requests and responses of the supplier and price-list API (issue 5). The client derives its
- * types from here; the server validates every body, query and param with these.
- */
-
-// ---------- suppliers ----------
-
-export const SUPPLIER_KEY_PATTERN = /^[a-z0-9][a-z0-9-]{0,39}$/;
-
-export const supplierKeySchema = z.string().trim().regex(SUPPLIER_KEY_PATTERN, 'lower-case letters, digits and dashes, at most 40');
-const supplierNameSchema = z.string().trim().min(1).max(120);
-const phoneSchema = z.string().trim().max(40);
-
-export const createSupplierBodySchema = z.object({
-  /** Derived from the name when left out. */
-  key: supplierKeySchema.optional(),
-  name: supplierNameSchema,
-  contactEmail: emailSchema.nullable().optional(),
-  phone: phoneSchema.nullable().optional(),
-});
-export type CreateSupplierBody = z.infer<typeof createSupplierBodySchema>;
-
-export const updateSupplierBodySchema = z
-  .object({
-    key: supplierKeySchema.optional(),
-    name: supplierNameSchema.optional(),
-    contactEmail: emailSchema.nullable().optional(),
-    phone: phoneSchema.nullable().optional(),
-    /** The remembered column mapping; null forgets it. */
-    mapping: mappingSchema.nullable().optional(),
-  })
-  .refine((b) => Object.keys(b).length > 0, { message: 'nothing to change' });
-export type UpdateSupplierBody = z.infer<typeof updateSupplierBodySchema>;
-
-export const supplierSchema = z.object({
-  id: z.string().uuid(),
-  key: z.string(),
-  name: z.string(),
-  contactEmail: z.string().nullable(),
-  phone: z.string().nullable(),
-  mapping: mappingSchema.nullable(),
-  /** When the last price list of this supplier was committed. */
-  lastPriceListAt: z.string().nullable(),
-  lastPriceListId: z.string().uuid().nullable(),
-  createdAt: z.string(),
-});
-export type Supplier = z.infer<typeof supplierSchema>;
+/** Supplier price lists: upload, preview, commit or discard, history (buyers and admins). */
 
 // ---------- price lists: requests ----------
 
@@ -68,18 +22,18 @@ const mappingFieldSchema = z
 
 /** The text fields of the multipart upload (the file itself is the `file` part). */
 export const uploadPriceListFieldsSchema = z.object({
-  supplierId: z.string().uuid(),
+  supplierId: uuidSchema,
   mapping: mappingFieldSchema.optional(),
   /** Optional id chosen by the client, so it can poll GET /api/price-lists/:id while the upload is processed. */
-  uploadId: z.string().uuid().optional(),
+  uploadId: uuidSchema.optional(),
 });
 export type UploadPriceListFields = z.infer<typeof uploadPriceListFieldsSchema>;
 
 export const previewPriceListBodySchema = z.object({ mapping: mappingSchema.optional() });
 export type PreviewPriceListBody = z.infer<typeof previewPriceListBodySchema>;
 
-const offsetSchema = z.coerce.number().int().min(0).max(10_000_000).default(0);
-const limitSchema = z.coerce.number().int().min(1).max(1000).default(100);
+const offsetSchema = offsetQuerySchema(10_000_000);
+const limitSchema = limitQuerySchema(1000, 100);
 
 export const PRICE_LIST_CHANGE_TYPES = ['new', 'changed', 'unchanged', 'supersession'] as const;
 export type PriceListChangeType = (typeof PRICE_LIST_CHANGE_TYPES)[number];
@@ -97,7 +51,7 @@ export const priceListErrorsQuerySchema = z.object({ offset: offsetSchema, limit
 export type PriceListErrorsQuery = z.infer<typeof priceListErrorsQuerySchema>;
 
 export const priceListHistoryQuerySchema = z.object({
-  supplierId: z.string().uuid().optional(),
+  supplierId: uuidSchema.optional(),
   offset: offsetSchema,
   limit: limitSchema,
 });
@@ -132,7 +86,7 @@ export const priceListProgressSchema = z.object({
 });
 export type PriceListProgress = z.infer<typeof priceListProgressSchema>;
 
-const personSchema = z.object({ id: z.string().uuid(), name: z.string() }).nullable();
+const personSchema = z.object({ id: uuidSchema, name: z.string() }).nullable();
 
 /** What the commit wrote, counted by the database. */
 export const priceListAppliedSchema = z.object({
@@ -144,8 +98,8 @@ export const priceListAppliedSchema = z.object({
 export type PriceListApplied = z.infer<typeof priceListAppliedSchema>;
 
 export const priceListSchema = z.object({
-  id: z.string().uuid(),
-  supplierId: z.string().uuid(),
+  id: uuidSchema,
+  supplierId: uuidSchema,
   supplierName: z.string(),
   fileName: z.string(),
   sha256: z.string(),
@@ -165,10 +119,10 @@ export const priceListSchema = z.object({
   progress: priceListProgressSchema,
   applied: priceListAppliedSchema.nullable(),
   createdBy: personSchema,
-  createdAt: z.string(),
+  createdAt: timestampSchema,
   committedBy: personSchema,
-  committedAt: z.string().nullable(),
-  discardedAt: z.string().nullable(),
+  committedAt: timestampSchema.nullable(),
+  discardedAt: timestampSchema.nullable(),
 });
 export type PriceList = z.infer<typeof priceListSchema>;
 
@@ -186,7 +140,7 @@ export type SupersessionState = (typeof SUPERSESSION_STATES)[number];
 export const priceListChangeSchema = z.object({
   line: z.number().int(),
   type: z.enum(['new', 'changed', 'unchanged']),
-  partId: z.string().uuid().nullable(),
+  partId: uuidSchema.nullable(),
   partNumber: z.string(),
   brand: z.string(),
   description: z.string().nullable(),
