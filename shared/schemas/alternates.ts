@@ -11,15 +11,17 @@ export const alternatesQuerySchema = z.object({
   all: z.enum(['1', 'true', '0', 'false']).optional(),
 });
 
-export const alternateSchema = z.object({
-  part: partSummarySchema,
-  verdict: verdictSchema,
-  /** How far from the original, for ranking within a verdict (lower is closer). */
-  deviation: z.number(),
-  checks: z.array(checkSchema),
-  inStock: z.boolean(),
-  price: priceSchema.nullable(),
-});
+export const alternateSchema = z
+  .object({
+    part: partSummarySchema,
+    verdict: verdictSchema,
+    /** How far from the original, for ranking within a verdict (lower is closer). */
+    deviation: z.number(),
+    checks: z.array(checkSchema),
+    inStock: z.boolean(),
+    price: priceSchema.nullable(),
+  })
+  .meta({ id: 'Alternate' });
 export type Alternate = z.infer<typeof alternateSchema>;
 
 /** `original` is the engine's fitted part of that kind, null when none is on file. */

@@ -28,13 +28,15 @@ export const inviteTokenParamSchema = z.object({ token: linkTokenSchema });
 // ---------- responses ----------
 
 /** The signed-in person as the API shows them: never a password hash. */
-export const userSchema = z.object({
-  id: uuidSchema,
-  email: z.string(),
-  name: z.string(),
-  role: z.enum(ROLES),
-  shopId: uuidSchema.nullable(),
-});
+export const userSchema = z
+  .object({
+    id: uuidSchema,
+    email: z.string(),
+    name: z.string(),
+    role: z.enum(ROLES),
+    shopId: uuidSchema.nullable(),
+  })
+  .meta({ id: 'User' });
 export type User = z.infer<typeof userSchema>;
 
 /** POST /api/auth/login, GET /api/auth/me, POST /api/auth/accept-invite. */

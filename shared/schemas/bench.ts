@@ -22,20 +22,22 @@ export type BenchBody = z.infer<typeof benchBodySchema>;
 export const benchVerdictSchema = z.enum(BENCH_VERDICTS);
 
 /** POST /api/bench/coil. */
-export const benchResultSchema = z.object({
-  verdict: benchVerdictSchema,
-  primaryVerdict: benchVerdictSchema,
-  secondaryVerdict: benchVerdictSchema.nullable(),
-  primaryAt20Ohm: z.number().nullable(),
-  secondaryAt20Kohm: z.number().nullable(),
-  window: z.object({
-    primaryOhmMin: z.number(),
-    primaryOhmMax: z.number(),
-    secondaryKohmMin: z.number().nullable().optional(),
-    secondaryKohmMax: z.number().nullable().optional(),
-  }),
-  reason: z.string(),
-  coil: sideLabelSchema,
-  cautions: z.array(z.string()),
-});
+export const benchResultSchema = z
+  .object({
+    verdict: benchVerdictSchema,
+    primaryVerdict: benchVerdictSchema,
+    secondaryVerdict: benchVerdictSchema.nullable(),
+    primaryAt20Ohm: z.number().nullable(),
+    secondaryAt20Kohm: z.number().nullable(),
+    window: z.object({
+      primaryOhmMin: z.number(),
+      primaryOhmMax: z.number(),
+      secondaryKohmMin: z.number().nullable().optional(),
+      secondaryKohmMax: z.number().nullable().optional(),
+    }),
+    reason: z.string(),
+    coil: sideLabelSchema,
+    cautions: z.array(z.string()),
+  })
+  .meta({ id: 'BenchResult' });
 export type BenchResult = z.infer<typeof benchResultSchema>;

@@ -25,14 +25,16 @@ export type CreateBrandBody = z.infer<typeof createBrandBodySchema>;
 
 // ---------- responses ----------
 
-export const brandSchema = z.object({
-  id: uuidSchema,
-  name: z.string(),
-  ours: z.boolean(),
-  heatCodeNote: z.string().nullable(),
-  /** Hottest first. */
-  heatCodes: z.array(z.object({ code: z.string(), heatStep: heatStepSchema })),
-});
+export const brandSchema = z
+  .object({
+    id: uuidSchema,
+    name: z.string(),
+    ours: z.boolean(),
+    heatCodeNote: z.string().nullable(),
+    /** Hottest first. */
+    heatCodes: z.array(z.object({ code: z.string(), heatStep: heatStepSchema })),
+  })
+  .meta({ id: 'Brand' });
 export type Brand = z.infer<typeof brandSchema>;
 
 export const brandsResponseSchema = z.object({ brands: z.array(brandSchema) });

@@ -7,7 +7,14 @@ export const uuidSchema = z.string().uuid();
 export const idParamSchema = z.object({ id: uuidSchema });
 
 /** An e-mail address as typed: trimmed and lower-cased before it is checked. */
-export const emailSchema = z.string().trim().toLowerCase().pipe(z.email()).pipe(z.string().max(254));
+export const emailSchema = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .pipe(z.email())
+  .pipe(z.string().max(254))
+  // The document shows what the pipe checks, not the trimming before it.
+  .meta({ format: 'email', maxLength: 254 });
 
 /** A moment in time as the API writes it: ISO 8601 in UTC. */
 export const timestampSchema = z.iso.datetime();

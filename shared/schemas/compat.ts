@@ -31,25 +31,29 @@ export type PlugCompareBody = z.infer<typeof plugCompareBodySchema>;
 export const VERDICTS = ['go', 'review', 'no-go'] as const;
 export const verdictSchema = z.enum(VERDICTS);
 
-export const checkSchema = z.object({
-  id: z.string(),
-  verdict: verdictSchema,
-  original: z.union([z.number(), z.string(), z.null()]),
-  substitute: z.union([z.number(), z.string(), z.null()]),
-  unit: z.string(),
-  reason: z.string(),
-});
+export const checkSchema = z
+  .object({
+    id: z.string(),
+    verdict: verdictSchema,
+    original: z.union([z.number(), z.string(), z.null()]),
+    substitute: z.union([z.number(), z.string(), z.null()]),
+    unit: z.string(),
+    reason: z.string(),
+  })
+  .meta({ id: 'CheckRow' });
 export type CheckRow = z.infer<typeof checkSchema>;
 
 /**
  * A claim of equivalence judged: the foreign part's own spec against ours, on the engine named.
  * `concerns` are the checks that are not go, with their reasons.
  */
-export const interchangeCheckSchema = z.object({
-  verdict: verdictSchema,
-  concerns: z.array(checkSchema.pick({ id: true, verdict: true, reason: true })),
-  engine: z.string(),
-});
+export const interchangeCheckSchema = z
+  .object({
+    verdict: verdictSchema,
+    concerns: z.array(checkSchema.pick({ id: true, verdict: true, reason: true })),
+    engine: z.string(),
+  })
+  .meta({ id: 'InterchangeCheck' });
 export type InterchangeCheck = z.infer<typeof interchangeCheckSchema>;
 
 export const loadPointSchema = z.object({
@@ -69,26 +73,28 @@ export const sideLabelSchema = z.object({ label: z.string(), partId: uuidSchema.
 export type SideLabel = z.infer<typeof sideLabelSchema>;
 
 /** POST /api/compat/coil and /api/compat/plug; also the `result` of a fit report. */
-export const compatResultSchema = z.object({
-  kind: z.enum(['coil', 'plug']),
-  verdict: verdictSchema,
-  checks: z.array(checkSchema),
-  loadPoints: z.array(loadPointSchema),
-  /** The original's own load points, for the chart's second line. */
-  originalLoadPoints: z.array(loadPointSchema),
-  /** Coils only: primary current at charging voltage over 0 … 1.5 × running dwell. */
-  currents: curvePairSchema.optional(),
-  /** Coils only: the same at cranking voltage over 0 … 1.5 × cranking dwell. */
-  crankingCurrents: curvePairSchema.optional(),
-  energyMj: z.object({ original: z.number(), substitute: z.number() }).optional(),
-  driverLimitA: z.number().nullable().optional(),
-  dwellMs: z.number().optional(),
-  crankingDwellMs: z.number().optional(),
-  original: sideLabelSchema,
-  substitute: sideLabelSchema,
-  engine: z.object({ label: z.string(), engineId: uuidSchema.nullable() }),
-  cautions: z.array(z.string()),
-});
+export const compatResultSchema = z
+  .object({
+    kind: z.enum(['coil', 'plug']),
+    verdict: verdictSchema,
+    checks: z.array(checkSchema),
+    loadPoints: z.array(loadPointSchema),
+    /** The original's own load points, for the chart's second line. */
+    originalLoadPoints: z.array(loadPointSchema),
+    /** Coils only: primary current at charging voltage over 0 … 1.5 × running dwell. */
+    currents: curvePairSchema.optional(),
+    /** Coils only: the same at cranking voltage over 0 … 1.5 × cranking dwell. */
+    crankingCurrents: curvePairSchema.optional(),
+    energyMj: z.object({ original: z.number(), substitute: z.number() }).optional(),
+    driverLimitA: z.number().nullable().optional(),
+    dwellMs: z.number().optional(),
+    crankingDwellMs: z.number().optional(),
+    original: sideLabelSchema,
+    substitute: sideLabelSchema,
+    engine: z.object({ label: z.string(), engineId: uuidSchema.nullable() }),
+    cautions: z.array(z.string()),
+  })
+  .meta({ id: 'CompatResult' });
 export type CompatResult = z.infer<typeof compatResultSchema>;
 
 /** The cautions of the product, shown on Compare, Bench test and every fit report. */

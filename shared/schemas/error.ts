@@ -17,7 +17,7 @@ export const ERROR_CODES = [
 export type ErrorCode = (typeof ERROR_CODES)[number];
 
 /** One problem with one field of a request: `field` is its dotted path ("substitute.spec.reachMm"). */
-export const fieldIssueSchema = z.object({ field: z.string(), message: z.string() });
+export const fieldIssueSchema = z.object({ field: z.string(), message: z.string() }).meta({ id: 'FieldIssue' });
 export type FieldIssue = z.infer<typeof fieldIssueSchema>;
 
 /** The `details` of a 400 that names fields. */
@@ -31,11 +31,13 @@ export const conflictDetailsSchema = z.object({ constraint: z.string() });
  * of field issues on a 400 that names fields, the unique constraint on a 409, or what a refused
  * price-list file was refused for (shared/schemas/price-lists.ts).
  */
-export const errorBodySchema = z.object({
-  error: z.object({
-    code: z.enum(ERROR_CODES),
-    message: z.string(),
-    details: z.unknown().optional(),
-  }),
-});
+export const errorBodySchema = z
+  .object({
+    error: z.object({
+      code: z.enum(ERROR_CODES),
+      message: z.string(),
+      details: z.unknown().optional(),
+    }),
+  })
+  .meta({ id: 'ErrorBody' });
 export type ErrorBody = z.infer<typeof errorBodySchema>;

@@ -36,16 +36,19 @@ const fitReportFields = z.object({
 });
 
 /** A saved report with the compare request it was made from (`inputs`) and its result. */
-export const fitReportSchema = z.discriminatedUnion('kind', [
-  fitReportFields.extend({ kind: z.literal('coil'), inputs: coilCompareBodySchema }),
-  fitReportFields.extend({ kind: z.literal('plug'), inputs: plugCompareBodySchema }),
-]);
+export const fitReportSchema = z
+  .discriminatedUnion('kind', [
+    fitReportFields.extend({ kind: z.literal('coil'), inputs: coilCompareBodySchema }),
+    fitReportFields.extend({ kind: z.literal('plug'), inputs: plugCompareBodySchema }),
+  ])
+  .meta({ id: 'FitReport' });
 export type FitReport = z.infer<typeof fitReportSchema>;
 
 /** A line of the list: the report without its inputs, result and link. */
 export const fitReportSummarySchema = fitReportFields
   .pick({ id: true, title: true, verdict: true, createdAt: true, createdBy: true, shopName: true })
-  .extend({ kind: z.enum(['coil', 'plug']) });
+  .extend({ kind: z.enum(['coil', 'plug']) })
+  .meta({ id: 'FitReportSummary' });
 export type FitReportSummary = z.infer<typeof fitReportSummarySchema>;
 
 export const fitReportResponseSchema = z.object({ fitReport: fitReportSchema });

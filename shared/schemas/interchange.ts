@@ -15,14 +15,16 @@ export const createInterchangeBodySchema = z.object({
 export type CreateInterchangeBody = z.infer<typeof createInterchangeBodySchema>;
 
 /** One claim as stored. */
-export const interchangeClaimSchema = z.object({
-  id: uuidSchema,
-  partId: uuidSchema,
-  brand: z.string(),
-  number: z.string(),
-  source: z.string(),
-  confidence: z.number(),
-});
+export const interchangeClaimSchema = z
+  .object({
+    id: uuidSchema,
+    partId: uuidSchema,
+    brand: z.string(),
+    number: z.string(),
+    source: z.string(),
+    confidence: z.number(),
+  })
+  .meta({ id: 'InterchangeClaim' });
 export type InterchangeClaim = z.infer<typeof interchangeClaimSchema>;
 
 export const interchangeResponseSchema = z.object({ interchange: interchangeClaimSchema });

@@ -55,17 +55,19 @@ export const partQuerySchema = z.object({ engineId: uuidSchema.optional() });
 // ---------- responses ----------
 
 /** Money a clerk may see: the sell price. Cost and margin are added only for buyers and admins. */
-export const priceSchema = z.object({
-  supplierId: uuidSchema,
-  supplier: z.string(),
-  listCents: z.number().int(),
-  coreCents: z.number().int(),
-  packQty: z.number().int(),
-  /** YYYY-MM-DD */
-  effectiveDate: z.string(),
-  costCents: z.number().int().optional(),
-  marginPct: z.number().optional(),
-});
+export const priceSchema = z
+  .object({
+    supplierId: uuidSchema,
+    supplier: z.string(),
+    listCents: z.number().int(),
+    coreCents: z.number().int(),
+    packQty: z.number().int(),
+    /** YYYY-MM-DD */
+    effectiveDate: z.string(),
+    costCents: z.number().int().optional(),
+    marginPct: z.number().optional(),
+  })
+  .meta({ id: 'Price' });
 export type Price = z.infer<typeof priceSchema>;
 
 export const stockSchema = z.object({ onHand: z.number().int(), bin: z.string(), inStock: z.boolean() });
@@ -75,18 +77,20 @@ export type Stock = z.infer<typeof stockSchema>;
 export const stockViewSchema = z.union([stockSchema, z.object({ inStock: z.boolean() })]);
 export type StockView = z.infer<typeof stockViewSchema>;
 
-export const partSummarySchema = z.object({
-  id: uuidSchema,
-  brand: z.string(),
-  ours: z.boolean(),
-  partNumber: z.string(),
-  kind: z.enum(PART_KINDS),
-  description: z.string(),
-  gtin: z.string().nullable(),
-  status: partStatusSchema,
-  supersededById: uuidSchema.nullable(),
-  hasSpec: z.boolean(),
-});
+export const partSummarySchema = z
+  .object({
+    id: uuidSchema,
+    brand: z.string(),
+    ours: z.boolean(),
+    partNumber: z.string(),
+    kind: z.enum(PART_KINDS),
+    description: z.string(),
+    gtin: z.string().nullable(),
+    status: partStatusSchema,
+    supersededById: uuidSchema.nullable(),
+    hasSpec: z.boolean(),
+  })
+  .meta({ id: 'PartSummary' });
 export type PartSummary = z.infer<typeof partSummarySchema>;
 
 export const partRefSchema = z.object({ id: uuidSchema, partNumber: z.string() });
@@ -109,15 +113,17 @@ export const interchangeRowSchema = interchangeClaimSchema.omit({ partId: true }
 export type InterchangeRow = z.infer<typeof interchangeRowSchema>;
 
 /** GET /api/parts/:id, and the answer of POST /api/parts and PATCH /api/parts/:id. */
-export const partDetailSchema = z.object({
-  part: partSummarySchema,
-  spec: partSpecSchema.nullable(),
-  interchange: z.array(interchangeRowSchema),
-  supersession: supersessionSchema,
-  stock: stockViewSchema,
-  /** The sell price: the lowest list price among the suppliers. */
-  price: priceSchema.nullable(),
-  /** One per supplier; cost and margin only for buyers and admins. */
-  prices: z.array(priceSchema),
-});
+export const partDetailSchema = z
+  .object({
+    part: partSummarySchema,
+    spec: partSpecSchema.nullable(),
+    interchange: z.array(interchangeRowSchema),
+    supersession: supersessionSchema,
+    stock: stockViewSchema,
+    /** The sell price: the lowest list price among the suppliers. */
+    price: priceSchema.nullable(),
+    /** One per supplier; cost and margin only for buyers and admins. */
+    prices: z.array(priceSchema),
+  })
+  .meta({ id: 'PartDetail' });
 export type PartDetail = z.infer<typeof partDetailSchema>;

@@ -1,15 +1,14 @@
 import { z } from 'zod';
 import { mappingSchema } from '../price-list/mapping';
 import { limitQuerySchema, offsetQuerySchema, timestampSchema, uuidSchema } from './common';
+import { fileText } from './text';
 
 /** Supplier price lists: upload, preview, commit or discard, history (buyers and admins). */
 
 // ---------- price lists: requests ----------
 
 /** The JSON text of a mapping, as sent in a multipart field. */
-const mappingFieldSchema = z
-  .string()
-  .max(256 * 1024)
+const mappingFieldSchema = fileText(256 * 1024)
   .transform((text, ctx) => {
     try {
       return JSON.parse(text) as unknown;
@@ -97,33 +96,35 @@ export const priceListAppliedSchema = z.object({
 });
 export type PriceListApplied = z.infer<typeof priceListAppliedSchema>;
 
-export const priceListSchema = z.object({
-  id: uuidSchema,
-  supplierId: uuidSchema,
-  supplierName: z.string(),
-  fileName: z.string(),
-  sha256: z.string(),
-  sizeBytes: z.number().int(),
-  encoding: z.string().nullable(),
-  delimiter: z.string().nullable(),
-  /** The file's headers, in file order. */
-  columns: z.array(z.string()),
-  mapping: mappingSchema,
-  mappingSource: z.enum(['given', 'remembered', 'guessed']),
-  status: z.enum(PRICE_LIST_STATUSES),
-  /** Another list of this supplier was committed after this one was compared: preview again before committing. */
-  stale: z.boolean(),
-  counts: priceListCountsSchema.nullable(),
-  flagged: z.number().int(),
-  flagThresholdPct: z.number().nullable(),
-  progress: priceListProgressSchema,
-  applied: priceListAppliedSchema.nullable(),
-  createdBy: personSchema,
-  createdAt: timestampSchema,
-  committedBy: personSchema,
-  committedAt: timestampSchema.nullable(),
-  discardedAt: timestampSchema.nullable(),
-});
+export const priceListSchema = z
+  .object({
+    id: uuidSchema,
+    supplierId: uuidSchema,
+    supplierName: z.string(),
+    fileName: z.string(),
+    sha256: z.string(),
+    sizeBytes: z.number().int(),
+    encoding: z.string().nullable(),
+    delimiter: z.string().nullable(),
+    /** The file's headers, in file order. */
+    columns: z.array(z.string()),
+    mapping: mappingSchema,
+    mappingSource: z.enum(['given', 'remembered', 'guessed']),
+    status: z.enum(PRICE_LIST_STATUSES),
+    /** Another list of this supplier was committed after this one was compared: preview again before committing. */
+    stale: z.boolean(),
+    counts: priceListCountsSchema.nullable(),
+    flagged: z.number().int(),
+    flagThresholdPct: z.number().nullable(),
+    progress: priceListProgressSchema,
+    applied: priceListAppliedSchema.nullable(),
+    createdBy: personSchema,
+    createdAt: timestampSchema,
+    committedBy: personSchema,
+    committedAt: timestampSchema.nullable(),
+    discardedAt: timestampSchema.nullable(),
+  })
+  .meta({ id: 'PriceList' });
 export type PriceList = z.infer<typeof priceListSchema>;
 
 export const priceListHistorySchema = z.object({ priceLists: z.array(priceListSchema), total: z.number().int() });
@@ -137,43 +138,47 @@ export const SUPERSESSION_STATES = ['link', 'already', 'not-found', 'kind-mismat
 export type SupersessionState = (typeof SUPERSESSION_STATES)[number];
 
 /** One line of the preview tables. Money in cents; `old…` is null for a new part or a first price. */
-export const priceListChangeSchema = z.object({
-  line: z.number().int(),
-  type: z.enum(['new', 'changed', 'unchanged']),
-  partId: uuidSchema.nullable(),
-  partNumber: z.string(),
-  brand: z.string(),
-  description: z.string().nullable(),
-  kind: z.enum(['coil', 'plug']).nullable(),
-  oldCostCents: z.number().int().nullable(),
-  newCostCents: z.number().int(),
-  oldListCents: z.number().int().nullable(),
-  newListCents: z.number().int(),
-  oldCoreCents: z.number().int().nullable(),
-  /** Null when the file gives no core charge (the current one is kept). */
-  newCoreCents: z.number().int().nullable(),
-  oldPackQty: z.number().int().nullable(),
-  newPackQty: z.number().int().nullable(),
-  costChangePct: z.number().nullable(),
-  listChangePct: z.number().nullable(),
-  flagged: z.boolean(),
-  /** For a new part: whether the file carried a complete spec (else it shows "no spec — no verdict"). */
-  specStored: z.boolean(),
-  supersedes: z.string().nullable(),
-  supersession: z.enum(SUPERSESSION_STATES).nullable(),
-});
+export const priceListChangeSchema = z
+  .object({
+    line: z.number().int(),
+    type: z.enum(['new', 'changed', 'unchanged']),
+    partId: uuidSchema.nullable(),
+    partNumber: z.string(),
+    brand: z.string(),
+    description: z.string().nullable(),
+    kind: z.enum(['coil', 'plug']).nullable(),
+    oldCostCents: z.number().int().nullable(),
+    newCostCents: z.number().int(),
+    oldListCents: z.number().int().nullable(),
+    newListCents: z.number().int(),
+    oldCoreCents: z.number().int().nullable(),
+    /** Null when the file gives no core charge (the current one is kept). */
+    newCoreCents: z.number().int().nullable(),
+    oldPackQty: z.number().int().nullable(),
+    newPackQty: z.number().int().nullable(),
+    costChangePct: z.number().nullable(),
+    listChangePct: z.number().nullable(),
+    flagged: z.boolean(),
+    /** For a new part: whether the file carried a complete spec (else it shows "no spec — no verdict"). */
+    specStored: z.boolean(),
+    supersedes: z.string().nullable(),
+    supersession: z.enum(SUPERSESSION_STATES).nullable(),
+  })
+  .meta({ id: 'PriceListChange' });
 export type PriceListChange = z.infer<typeof priceListChangeSchema>;
 
 export const priceListChangesSchema = z.object({ changes: z.array(priceListChangeSchema), total: z.number().int() });
 export type PriceListChanges = z.infer<typeof priceListChangesSchema>;
 
-export const priceListRowErrorSchema = z.object({
-  line: z.number().int(),
-  /** The header as printed in the file; null when the line as a whole is wrong. */
-  column: z.string().nullable(),
-  field: z.string().nullable(),
-  message: z.string(),
-});
+export const priceListRowErrorSchema = z
+  .object({
+    line: z.number().int(),
+    /** The header as printed in the file; null when the line as a whole is wrong. */
+    column: z.string().nullable(),
+    field: z.string().nullable(),
+    message: z.string(),
+  })
+  .meta({ id: 'PriceListRowError' });
 export type PriceListRowError = z.infer<typeof priceListRowErrorSchema>;
 
 /** `total` counts reasons; a line rejected for two reasons has two entries. */

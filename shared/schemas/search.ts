@@ -40,21 +40,23 @@ export const searchQuerySchema = searchFacetQuerySchema.extend({
 });
 export type SearchQuery = z.infer<typeof searchQuerySchema>;
 
-export const searchHitSchema = z.object({
-  partId: uuidSchema,
-  brand: z.string(),
-  partNumber: z.string(),
-  kind: z.enum(PART_KINDS),
-  description: z.string(),
-  matchedBy: z.enum(MATCHED_BY),
-  matchedNumber: z.string().nullable(),
-  inStock: z.boolean(),
-  /** The store's count: absent for technicians, who see in stock yes/no only. */
-  onHand: z.number().int().optional(),
-  hasSpec: z.boolean(),
-  /** For a hit found through interchange: the verdict of the foreign part's spec against ours. */
-  check: interchangeCheckSchema.nullable().optional(),
-});
+export const searchHitSchema = z
+  .object({
+    partId: uuidSchema,
+    brand: z.string(),
+    partNumber: z.string(),
+    kind: z.enum(PART_KINDS),
+    description: z.string(),
+    matchedBy: z.enum(MATCHED_BY),
+    matchedNumber: z.string().nullable(),
+    inStock: z.boolean(),
+    /** The store's count: absent for technicians, who see in stock yes/no only. */
+    onHand: z.number().int().optional(),
+    hasSpec: z.boolean(),
+    /** For a hit found through interchange: the verdict of the foreign part's spec against ours. */
+    check: interchangeCheckSchema.nullable().optional(),
+  })
+  .meta({ id: 'SearchHit' });
 export type SearchHit = z.infer<typeof searchHitSchema>;
 
 export const searchResponseSchema = z.object({

@@ -58,7 +58,8 @@ export const coilSpecSchema = z
         message: 'secondaryKohmMin must not exceed secondaryKohmMax',
       });
     }
-  });
+  })
+  .meta({ id: 'CoilSpec' });
 export type CoilSpec = z.infer<typeof coilSpecSchema>;
 
 /** A plug spec as stored: the brand's own heat code, mapped to a heat step by the brand's table. */
@@ -80,18 +81,22 @@ export const heatStepSchema = z.number().int().min(HEAT_STEP_MIN).max(HEAT_STEP_
 /** A brand's printed heat code ("6", "BR7"). */
 export const heatCodeSchema = text({ min: 1, max: 20 });
 
-export const plugSpecSchema = z.object({
-  ...plugSpecFields,
-  heatCode: heatCodeSchema,
-});
+export const plugSpecSchema = z
+  .object({
+    ...plugSpecFields,
+    heatCode: heatCodeSchema,
+  })
+  .meta({ id: 'PlugSpec' });
 export type PlugSpec = z.infer<typeof plugSpecSchema>;
 
 /** A plug spec with its heat step resolved: what the compatibility model works on. */
-export const resolvedPlugSpecSchema = z.object({
-  ...plugSpecFields,
-  heatCode: heatCodeSchema.nullable().optional(),
-  heatStep: heatStepSchema,
-});
+export const resolvedPlugSpecSchema = z
+  .object({
+    ...plugSpecFields,
+    heatCode: heatCodeSchema.nullable().optional(),
+    heatStep: heatStepSchema,
+  })
+  .meta({ id: 'ResolvedPlugSpec' });
 export type ResolvedPlugSpec = z.infer<typeof resolvedPlugSpecSchema>;
 
 export const engineSpecSchema = z.object({

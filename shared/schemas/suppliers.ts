@@ -36,18 +36,20 @@ export type UpdateSupplierBody = z.infer<typeof updateSupplierBodySchema>;
 
 // ---------- responses ----------
 
-export const supplierSchema = z.object({
-  id: uuidSchema,
-  key: z.string(),
-  name: z.string(),
-  contactEmail: z.string().nullable(),
-  phone: z.string().nullable(),
-  mapping: mappingSchema.nullable(),
-  /** When the last price list of this supplier was committed. */
-  lastPriceListAt: timestampSchema.nullable(),
-  lastPriceListId: uuidSchema.nullable(),
-  createdAt: timestampSchema,
-});
+export const supplierSchema = z
+  .object({
+    id: uuidSchema,
+    key: z.string(),
+    name: z.string(),
+    contactEmail: z.string().nullable(),
+    phone: z.string().nullable(),
+    mapping: mappingSchema.nullable(),
+    /** When the last price list of this supplier was committed. */
+    lastPriceListAt: timestampSchema.nullable(),
+    lastPriceListId: uuidSchema.nullable(),
+    createdAt: timestampSchema,
+  })
+  .meta({ id: 'Supplier' });
 export type Supplier = z.infer<typeof supplierSchema>;
 
 export const suppliersResponseSchema = z.object({ suppliers: z.array(supplierSchema) });

@@ -6,5 +6,5 @@ export type HealthResponse = z.infer<typeof healthResponseSchema>;
 
 /** GET /api/openapi.json: this API's OpenAPI 3.1 document. */
 export const openApiDocumentSchema = z
-  .object({ openapi: z.string(), info: z.object({ title: z.string(), version: z.string() }) })
+  .object({ openapi: z.string(), info: z.object({ title: z.string(), version: z.string() }).catchall(z.unknown()) })
   .catchall(z.unknown());

@@ -36,6 +36,15 @@ export function text({ max, min = 0, multiline = false, trim = true }: TextOptio
   return (min > 0 ? clean.min(min) : clean).max(max);
 }
 
+// eslint-disable-next-line no-control-regex
+export const NO_NUL_PATTERN = /^[^\u0000]*$/;
+
+/**
+ * Text read from a supplier's file and sent back as it was (a column header in a mapping): a
+ * damaged file can put any character there, so only NUL, which PostgreSQL cannot store, is refused.
+ */
+export const fileText = (max: number) => z.string().max(max).regex(NO_NUL_PATTERN, 'must not contain a NUL character');
+
 /** A link token (invitation, shared fit report): base64url, as the server makes them. */
 export const linkTokenSchema = z
   .string()

@@ -28,12 +28,14 @@ export type UpdateUserBody = z.infer<typeof updateUserBodySchema>;
 
 // ---------- responses ----------
 
-export const teamMemberSchema = userSchema.extend({
-  disabled: z.boolean(),
-  shopName: z.string().nullable(),
-  invitePending: z.boolean(),
-  createdAt: timestampSchema,
-});
+export const teamMemberSchema = userSchema
+  .extend({
+    disabled: z.boolean(),
+    shopName: z.string().nullable(),
+    invitePending: z.boolean(),
+    createdAt: timestampSchema,
+  })
+  .meta({ id: 'TeamMember' });
 export type TeamMember = z.infer<typeof teamMemberSchema>;
 
 export const teamMemberResponseSchema = z.object({ user: teamMemberSchema });

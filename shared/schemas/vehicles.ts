@@ -33,7 +33,9 @@ export type VehicleEngine = z.infer<typeof vehicleEngineSchema>;
 export const vehicleEnginesResponseSchema = z.object({ engines: z.array(vehicleEngineSchema) });
 export type VehicleEnginesResponse = z.infer<typeof vehicleEnginesResponseSchema>;
 
-export const engineSchema = engineSpecSchema.extend({ id: uuidSchema, description: z.string(), systemVoltage: z.number() });
+export const engineSchema = engineSpecSchema
+  .extend({ id: uuidSchema, description: z.string(), systemVoltage: z.number() })
+  .meta({ id: 'Engine' });
 export type Engine = z.infer<typeof engineSchema>;
 
 export const FITMENT_POSITIONS = ['ignition coil', 'spark plug'] as const;
