@@ -23,8 +23,11 @@ export const plainWords: z.core.$ZodErrorMap = (issue) => {
       return `must not have ${issue.keys.length === 1 ? 'the field' : 'the fields'} ${issue.keys.join(', ')}`;
     case 'invalid_value':
       return issue.values.length === 1 ? `must be ${String(issue.values[0])}` : `must be one of ${issue.values.map(String).join(', ')}`;
-    case 'invalid_union':
-      return 'does not match any accepted form';
+    case 'invalid_union': {
+      // A discriminated union whose discriminator matched no branch lists the values it takes.
+      const options = (issue as { options?: unknown }).options;
+      return Array.isArray(options) ? `must be one of ${options.map(String).join(', ')}` : 'does not match any accepted form';
+    }
     case 'invalid_key':
       return 'is not a valid key';
     case 'invalid_element':
