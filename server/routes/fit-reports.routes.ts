@@ -13,12 +13,13 @@ import { mount } from './mount';
 export function fitReportRoutes(deps: AppDeps): Router {
   const r = Router();
   const ds = deps.dataSource;
-  const base = appUrl(deps.env);
-  const reports = () => new FitReportService(ds, base);
+  // Read per request: the address is known only once the server listens (tests set it then).
+  const base = () => appUrl(deps.env);
+  const reports = () => new FitReportService(ds, base());
 
   mount(r, 'POST /api/fit-reports', async (req, res) => {
     const body = parseBody(fitReportBodySchema, req);
-    res.status(201).json(presentFitReportResponse(await reports().create(currentUser(req), body, (await getSettings(ds)).compat), base));
+    res.status(201).json(presentFitReportResponse(await reports().create(currentUser(req), body, (await getSettings(ds)).compat), base()));
   });
 
   mount(r, 'GET /api/fit-reports', async (req, res) => {
@@ -27,7 +28,7 @@ export function fitReportRoutes(deps: AppDeps): Router {
 
   mount(r, 'GET /api/fit-reports/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    res.json(presentFitReportResponse(await reports().get(currentUser(req), id), base));
+    res.json(presentFitReportResponse(await reports().get(currentUser(req), id), base()));
   });
 
   mount(r, 'POST /api/fit-reports/:id/email', async (req, res) => {
@@ -40,7 +41,7 @@ export function fitReportRoutes(deps: AppDeps): Router {
   // The share link: read-only, no sign-in, found only by its unguessable token.
   mount(r, 'GET /api/shared/fit-reports/:token', async (req, res) => {
     const { token } = parseParams(shareTokenParamSchema, req);
-    res.json(presentFitReportResponse(await reports().getShared(token), base));
+    res.json(presentFitReportResponse(await reports().getShared(token), base()));
   });
 
   return r;
