@@ -24,6 +24,7 @@ export default defineConfig({
           include: ['tests/server/**/*.test.ts'],
           environment: 'node',
           globalSetup: ['tests/helpers/global-setup.ts'],
+          setupFiles: ['tests/helpers/response-contract.ts'],
           fileParallelism: false,
           testTimeout: 30000,
           hookTimeout: 60000,

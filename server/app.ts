@@ -9,6 +9,8 @@ import { csrfErrorToAppError, csrfProtection } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { configurePassport } from './middleware/passport';
 import { sessionMiddleware } from './middleware/session';
+import { docsPage, openApiRoutes } from './openapi/docs.routes';
+import { checkResponses } from './openapi/response-check';
 import { authRoutes } from './routes/auth.routes';
 import { catalogRoutes } from './routes/catalog.routes';
 import { compatRoutes } from './routes/compat.routes';
@@ -31,6 +33,7 @@ export function buildApiRouter(deps: AppDeps, csrf: ReturnType<typeof csrfProtec
   api.use(supplierRoutes(deps));
   api.use(priceListRoutes(deps));
   api.use(jobsRoutes(deps));
+  api.use(openApiRoutes());
   return api;
 }
 
@@ -54,6 +57,8 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
   );
+  // In the API tests every answer is held against the OpenAPI document.
+  if (deps.env.NODE_ENV === 'test') app.use('/api', checkResponses());
   app.use('/api', express.json({ limit: '2mb' }));
   app.use(cookieParser());
   app.use(sessionMiddleware(deps));
@@ -62,6 +67,7 @@ export function createApp(deps: AppDeps): Express {
 
   const csrf = csrfProtection(deps.env);
   app.use('/api', csrf.doubleCsrfProtection, csrfErrorToAppError);
+  app.use(docsPage());
   const api = buildApiRouter(deps, csrf, passport);
   app.locals.apiRouter = api;
   app.use(api);

@@ -1,6 +1,6 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 import type { PartKind } from '../../shared/schemas/specs';
-import type { SupersessionState } from '../../shared/schemas/price-list';
+import type { SupersessionState } from '../../shared/schemas/price-lists';
 
 /**
  * A valid line of a price list, normalised, with its comparison against the catalog. Written by

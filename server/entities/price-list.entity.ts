@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import type { Mapping } from '../../shared/price-list/mapping';
-import type { PriceListApplied, PriceListCounts, PriceListProgress, PriceListStatus } from '../../shared/schemas/price-list';
+import type { PriceListApplied, PriceListCounts, PriceListProgress, PriceListStatus } from '../../shared/schemas/price-lists';
 
 /** One uploaded supplier price list: staged for the preview, then committed or discarded. */
 @Entity('price_list')

@@ -2,7 +2,7 @@ import { createServer, type Server as HttpServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
-import type { OutboxMessage } from '../../shared/schemas/auth';
+import type { OutboxMessage } from '../../shared/schemas/outbox';
 
 /**
  * The local mail catcher: a real SMTP server on loopback that keeps what it receives, and a small

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
-import type { ErrorBody } from '../../shared/schemas/error';
+import type { ErrorBody, ErrorCode } from '../../shared/schemas/error';
+import { fieldIssues, fieldSentence } from '../../shared/validation/field-issues';
 import { AppError } from '../errors';
 
 interface PgError {
@@ -13,13 +14,8 @@ function isPgError(err: unknown): err is PgError {
   return typeof err === 'object' && err !== null && typeof (err as PgError).code === 'string';
 }
 
-function bodyOf(code: string, message: string, details?: unknown): ErrorBody {
+function bodyOf(code: ErrorCode, message: string, details?: unknown): ErrorBody {
   return { error: details === undefined ? { code, message } : { code, message, details } };
-}
-
-/** Zod issues as the API reports them: the field's path and what is wrong with it. */
-export function zodDetails(err: ZodError): { field: string; message: string }[] {
-  return err.issues.map((i) => ({ field: i.path.join('.') || '(body)', message: i.message }));
 }
 
 export const notFoundHandler: RequestHandler = (req, _res, next) => {
@@ -34,9 +30,10 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     return;
   }
   if (err instanceof ZodError) {
-    const details = zodDetails(err);
+    // Each field by its dotted path, in plain words; the message is the first of them as a sentence.
+    const details = fieldIssues(err);
     const first = details[0];
-    res.status(400).json(bodyOf('validation_failed', first ? `${first.field}: ${first.message}` : 'Invalid input.', details));
+    res.status(400).json(bodyOf('validation_failed', first ? fieldSentence(first) : 'Invalid input.', details));
     return;
   }
   const status = typeof err === 'object' && err !== null && 'status' in err ? Number((err as { status: unknown }).status) : 0;

@@ -1,5 +1,5 @@
 import { canSeeCost, type Role } from '../../shared/roles';
-import type { Price, Stock } from '../../shared/schemas/catalog';
+import type { Price, StockView } from '../../shared/schemas/parts';
 
 export interface PriceRow {
   supplierId: string;
@@ -30,14 +30,19 @@ export function presentPrice(row: PriceRow, role: Role): Price {
   return { ...base, costCents: row.costCents, marginPct: marginPct(row.costCents, row.listCents) };
 }
 
-/** The store's sell price for a part: the lowest list price among its suppliers. */
-export function sellPrice(rows: PriceRow[], role: Role): Price | null {
-  const best = [...rows].sort((a, b) => a.listCents - b.listCents || a.costCents - b.costCents)[0];
+/** The row the store sells a part at: the lowest list price among its suppliers (then the lowest cost). */
+export function sellPriceRow(rows: readonly PriceRow[]): PriceRow | undefined {
+  return [...rows].sort((a, b) => a.listCents - b.listCents || a.costCents - b.costCents)[0];
+}
+
+/** The store's sell price for a part, as the role may see it. */
+export function sellPrice(rows: readonly PriceRow[], role: Role): Price | null {
+  const best = sellPriceRow(rows);
   return best ? presentPrice(best, role) : null;
 }
 
 /** A technician (a shop's login) sees in stock yes/no, not the store's count or bin. */
-export function presentStock(onHand: number, bin: string, role: Role): Stock | { inStock: boolean } {
+export function presentStock(onHand: number, bin: string, role: Role): StockView {
   if (role === 'technician') return { inStock: onHand > 0 };
   return { onHand, bin, inStock: onHand > 0 };
 }

@@ -1,14 +1,15 @@
 import { Router } from 'express';
 import type { PassportStatic } from 'passport';
-import { acceptInviteBodySchema, loginBodySchema } from '../../shared/schemas/auth';
+import { acceptInviteBodySchema, inviteTokenParamSchema, loginBodySchema } from '../../shared/schemas/auth';
 import type { AppDeps } from '../deps';
 import { AppError } from '../errors';
 import { currentUser } from '../middleware/auth';
 import type { csrfProtection } from '../middleware/csrf';
 import { loginRateLimits } from '../middleware/rate-limit';
 import { SESSION_COOKIE } from '../middleware/session';
-import { parseBody } from '../middleware/validate';
-import { presentUser } from '../presenters/user.presenter';
+import { parseBody, parseParams } from '../middleware/validate';
+import { presentCsrfToken, presentHealth } from '../presenters/system.presenter';
+import { presentInvitation, presentUser, presentUserResponse } from '../presenters/user.presenter';
 import { acceptInvite, describeInvitation } from '../services/users.service';
 import { mount } from './mount';
 
@@ -18,11 +19,11 @@ export function authRoutes(deps: AppDeps, csrf: ReturnType<typeof csrfProtection
   const r = Router();
 
   mount(r, 'GET /api/health', (_req, res) => {
-    res.json({ ok: true });
+    res.json(presentHealth());
   });
 
   mount(r, 'GET /api/auth/csrf', (req, res) => {
-    res.json({ token: csrf.generateCsrfToken(req, res, { overwrite: false }) });
+    res.json(presentCsrfToken(csrf.generateCsrfToken(req, res, { overwrite: false })));
   });
 
   mount(r, 'POST /api/auth/login', ...loginRateLimits(deps.env), (req, res, next) => {
@@ -33,7 +34,7 @@ export function authRoutes(deps: AppDeps, csrf: ReturnType<typeof csrfProtection
       // passport regenerates the session on logIn, so a fixed session id cannot be reused.
       req.logIn(user, (loginErr) => {
         if (loginErr) return next(loginErr);
-        res.json({ user });
+        res.json(presentUserResponse(user));
       });
     })(req, res, next);
   });
@@ -50,17 +51,18 @@ export function authRoutes(deps: AppDeps, csrf: ReturnType<typeof csrfProtection
   });
 
   mount(r, 'GET /api/auth/me', (req, res) => {
-    res.json({ user: currentUser(req) });
+    res.json(presentUserResponse(currentUser(req)));
   });
 
   mount(r, 'GET /api/auth/invite/:token', async (req, res) => {
-    res.json({ invitation: await describeInvitation(deps.dataSource, String(req.params.token)) });
+    const { token } = parseParams(inviteTokenParamSchema, req);
+    res.json(presentInvitation(await describeInvitation(deps.dataSource, token)));
   });
 
   mount(r, 'POST /api/auth/accept-invite', async (req, res) => {
     const body = parseBody(acceptInviteBodySchema, req);
     const user = await acceptInvite(deps.dataSource, body);
-    res.json({ user: presentUser(user) });
+    res.json(presentUserResponse(presentUser(user)));
   });
 
   return r;

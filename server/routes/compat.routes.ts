@@ -1,19 +1,17 @@
 import { Router } from 'express';
-import { benchTest } from '../../shared/compat';
-import { idParamSchema } from '../../shared/schemas/auth';
-import {
-  alternatesQuerySchema,
-  benchBodySchema,
-  CAUTIONS,
-  coilCompareBodySchema,
-  plugCompareBodySchema,
-} from '../../shared/schemas/compat';
+import { alternatesQuerySchema } from '../../shared/schemas/alternates';
+import { benchBodySchema } from '../../shared/schemas/bench';
+import { idParamSchema } from '../../shared/schemas/common';
+import { coilCompareBodySchema, plugCompareBodySchema } from '../../shared/schemas/compat';
 import type { AppDeps } from '../deps';
 import { currentUser } from '../middleware/auth';
 import { parseBody, parseParams, parseQuery } from '../middleware/validate';
+import { presentAlternates } from '../presenters/alternates.presenter';
+import { presentBenchResult } from '../presenters/bench.presenter';
+import { presentCoilComparison, presentPlugComparison } from '../presenters/compat.presenter';
 import { engineAlternates } from '../services/compat/alternates.service';
-import { asBadRequest, compareCoilRequest, comparePlugRequest } from '../services/compat/compare.service';
-import { resolveCoil } from '../services/compat/resolve';
+import { runBenchTest } from '../services/compat/bench.service';
+import { compareCoilRequest, comparePlugRequest } from '../services/compat/compare.service';
 import { getSettings } from '../services/settings.service';
 import { mount } from './mount';
 
@@ -23,35 +21,26 @@ export function compatRoutes(deps: AppDeps): Router {
 
   mount(r, 'POST /api/compat/coil', async (req, res) => {
     const body = parseBody(coilCompareBodySchema, req);
-    res.json(await compareCoilRequest(ds, body, (await getSettings(ds)).compat));
+    res.json(presentCoilComparison(await compareCoilRequest(ds, body, (await getSettings(ds)).compat)));
   });
 
   mount(r, 'POST /api/compat/plug', async (req, res) => {
     const body = parseBody(plugCompareBodySchema, req);
-    res.json(await comparePlugRequest(ds, body, (await getSettings(ds)).compat));
+    res.json(presentPlugComparison(await comparePlugRequest(ds, body, (await getSettings(ds)).compat)));
   });
 
   mount(r, 'GET /api/engines/:id/alternates', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const q = parseQuery(alternatesQuerySchema, req);
     const includeNoGo = q.all === '1' || q.all === 'true';
-    res.json(await engineAlternates(ds, id, q.kind, includeNoGo, currentUser(req).role, (await getSettings(ds)).compat));
+    const ranked = await engineAlternates(ds, id, q.kind, includeNoGo, (await getSettings(ds)).compat);
+    res.json(presentAlternates(ranked, currentUser(req).role));
   });
 
   mount(r, 'POST /api/bench/coil', async (req, res) => {
     const body = parseBody(benchBodySchema, req);
-    const coil = await resolveCoil(ds, 'partId' in body ? { partId: body.partId } : { spec: body.spec }, 'coil');
-    const settings = (await getSettings(ds)).compat;
-    const result = asBadRequest(() =>
-      benchTest({
-        primaryOhm: body.measured.primaryOhm,
-        ...(body.measured.secondaryKohm !== undefined ? { secondaryKohm: body.measured.secondaryKohm } : {}),
-        coilTempC: body.measured.temperatureC,
-        window: coil.spec,
-        settings,
-      }),
-    );
-    res.json({ ...result, coil: { label: coil.label, partId: coil.partId }, cautions: [...CAUTIONS] });
+    const { result, coil } = await runBenchTest(ds, body, (await getSettings(ds)).compat);
+    res.json(presentBenchResult(result, coil));
   });
 
   return r;

@@ -1,47 +1,47 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { idParamSchema } from '../../shared/schemas/auth';
-import { emailFitReportBodySchema, fitReportBodySchema } from '../../shared/schemas/compat';
+import { idParamSchema } from '../../shared/schemas/common';
+import { emailFitReportBodySchema, fitReportBodySchema, shareTokenParamSchema } from '../../shared/schemas/fit-reports';
 import { appUrl } from '../config/env';
 import type { AppDeps } from '../deps';
 import { currentUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
+import { presentEmailSent, presentFitReportResponse, presentFitReports } from '../presenters/fit-report.presenter';
 import { FitReportService } from '../services/compat/fit-reports.service';
 import { getSettings } from '../services/settings.service';
 import { mount } from './mount';
 
-const tokenParamSchema = z.object({ token: z.string().min(20).max(100) });
-
 export function fitReportRoutes(deps: AppDeps): Router {
   const r = Router();
   const ds = deps.dataSource;
-  const reports = () => new FitReportService(ds, appUrl(deps.env));
+  // Read per request: the address is known only once the server listens (tests set it then).
+  const base = () => appUrl(deps.env);
+  const reports = () => new FitReportService(ds, base());
 
   mount(r, 'POST /api/fit-reports', async (req, res) => {
     const body = parseBody(fitReportBodySchema, req);
-    res.status(201).json({ fitReport: await reports().create(currentUser(req), body, (await getSettings(ds)).compat) });
+    res.status(201).json(presentFitReportResponse(await reports().create(currentUser(req), body, (await getSettings(ds)).compat), base()));
   });
 
   mount(r, 'GET /api/fit-reports', async (req, res) => {
-    res.json({ fitReports: await reports().list(currentUser(req)) });
+    res.json(presentFitReports(await reports().list(currentUser(req))));
   });
 
   mount(r, 'GET /api/fit-reports/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    res.json({ fitReport: await reports().get(currentUser(req), id) });
+    res.json(presentFitReportResponse(await reports().get(currentUser(req), id), base()));
   });
 
   mount(r, 'POST /api/fit-reports/:id/email', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const { to } = parseBody(emailFitReportBodySchema, req);
     await reports().email(currentUser(req), id, to, deps.jobs);
-    res.status(202).json({ sent: true });
+    res.status(202).json(presentEmailSent());
   });
 
   // The share link: read-only, no sign-in, found only by its unguessable token.
   mount(r, 'GET /api/shared/fit-reports/:token', async (req, res) => {
-    const { token } = parseParams(tokenParamSchema, req);
-    res.json({ fitReport: await reports().getShared(token) });
+    const { token } = parseParams(shareTokenParamSchema, req);
+    res.json(presentFitReportResponse(await reports().getShared(token), base()));
   });
 
   return r;

@@ -1,17 +1,24 @@
 import { rm } from 'node:fs/promises';
 import { Router } from 'express';
-import { idParamSchema } from '../../shared/schemas/auth';
+import { idParamSchema } from '../../shared/schemas/common';
 import {
   previewPriceListBodySchema,
   priceListChangesQuerySchema,
   priceListErrorsQuerySchema,
   priceListHistoryQuerySchema,
   uploadPriceListFieldsSchema,
-} from '../../shared/schemas/price-list';
+} from '../../shared/schemas/price-lists';
 import type { AppDeps } from '../deps';
 import { AppError } from '../errors';
 import { currentUser } from '../middleware/auth';
 import { parseBody, parseParams, parseQuery } from '../middleware/validate';
+import {
+  presentChanges,
+  presentCommitted,
+  presentPriceList,
+  presentPriceListHistory,
+  presentRowErrors,
+} from '../presenters/price-list.presenter';
 import { commitPriceList } from '../services/price-list/commit';
 import { writeErrorsCsv } from '../services/price-list/errors-csv';
 import { enqueueCommitFollowUp } from '../services/price-list/follow-up';
@@ -32,7 +39,8 @@ export function priceListRoutes(deps: AppDeps): Router {
   }
 
   mount(r, 'GET /api/price-lists', async (req, res) => {
-    res.json(await listPriceLists(ds, parseQuery(priceListHistoryQuerySchema, req)));
+    const { rows, total } = await listPriceLists(ds, parseQuery(priceListHistoryQuerySchema, req));
+    res.json(presentPriceListHistory(rows, total));
   });
 
   // Processed inside the request; a concurrent GET /api/price-lists/:id (with the client's uploadId) shows the progress.
@@ -53,7 +61,7 @@ export function priceListRoutes(deps: AppDeps): Router {
         actorId: currentUser(req).id,
         ...settings,
       });
-      res.status(201).json(list);
+      res.status(201).json(presentPriceList(list));
     } finally {
       if (file) await rm(file.path, { force: true });
     }
@@ -61,23 +69,25 @@ export function priceListRoutes(deps: AppDeps): Router {
 
   mount(r, 'GET /api/price-lists/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    res.json(await getPriceList(ds, id));
+    res.json(presentPriceList(await getPriceList(ds, id)));
   });
 
   mount(r, 'GET /api/price-lists/:id/changes', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    res.json(await listChanges(ds, id, parseQuery(priceListChangesQuerySchema, req)));
+    const { rows, total } = await listChanges(ds, id, parseQuery(priceListChangesQuerySchema, req));
+    res.json(presentChanges(rows, total));
   });
 
   mount(r, 'GET /api/price-lists/:id/errors', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    res.json(await listRowErrors(ds, id, parseQuery(priceListErrorsQuerySchema, req)));
+    const { rows, total } = await listRowErrors(ds, id, parseQuery(priceListErrorsQuerySchema, req));
+    res.json(presentRowErrors(rows, total));
   });
 
   mount(r, 'GET /api/price-lists/:id/errors.csv', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const list = await getPriceList(ds, id);
-    const base = list.fileName.replace(/\.[^.]*$/, '') || 'price-list';
+    const base = list.file_name.replace(/\.[^.]*$/, '') || 'price-list';
     res.setHeader('Content-Type', 'text/csv; charset=utf-8');
     res.setHeader(
       'Content-Disposition',
@@ -90,19 +100,19 @@ export function priceListRoutes(deps: AppDeps): Router {
   mount(r, 'POST /api/price-lists/:id/preview', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const body = parseBody(previewPriceListBodySchema, req);
-    res.json(await previewPriceList(deps, { id, mapping: body.mapping, ...(await intakeSettings()) }));
+    res.json(presentPriceList(await previewPriceList(deps, { id, mapping: body.mapping, ...(await intakeSettings()) })));
   });
 
   mount(r, 'POST /api/price-lists/:id/commit', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     await commitPriceList(ds, id, currentUser(req).id, (m) => enqueueCommitFollowUp(m, deps.jobs, id));
     // The search index and the buyers' e-mail are queued with the commit: nothing after it can fail the request.
-    res.json({ ...(await getPriceList(ds, id)), notices: [] });
+    res.json(presentCommitted(await getPriceList(ds, id), []));
   });
 
   mount(r, 'POST /api/price-lists/:id/discard', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    res.json(await discardPriceList(ds, id, currentUser(req).id));
+    res.json(presentPriceList(await discardPriceList(ds, id, currentUser(req).id)));
   });
 
   return r;

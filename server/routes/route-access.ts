@@ -16,6 +16,7 @@ const BENCH = ['technician', 'admin'] as const;
 
 export const ROUTE_ACCESS = {
   'GET /api/health': 'public',
+  'GET /api/openapi.json': 'public',
   'GET /api/auth/csrf': 'public',
   'POST /api/auth/login': 'public',
   'POST /api/auth/logout': 'public',

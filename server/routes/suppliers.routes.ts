@@ -1,9 +1,10 @@
 import { Router } from 'express';
-import { idParamSchema } from '../../shared/schemas/auth';
-import { createSupplierBodySchema, updateSupplierBodySchema } from '../../shared/schemas/price-list';
+import { idParamSchema } from '../../shared/schemas/common';
+import { createSupplierBodySchema, updateSupplierBodySchema } from '../../shared/schemas/suppliers';
 import type { AppDeps } from '../deps';
 import { currentUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
+import { presentSupplierResponse, presentSuppliers } from '../presenters/supplier.presenter';
 import { createSupplier, listSuppliers, updateSupplier } from '../services/suppliers.service';
 import { mount } from './mount';
 
@@ -13,18 +14,18 @@ export function supplierRoutes(deps: AppDeps): Router {
   const ds = deps.dataSource;
 
   mount(r, 'GET /api/suppliers', async (_req, res) => {
-    res.json({ suppliers: await listSuppliers(ds) });
+    res.json(presentSuppliers(await listSuppliers(ds)));
   });
 
   mount(r, 'POST /api/suppliers', async (req, res) => {
     const body = parseBody(createSupplierBodySchema, req);
-    res.status(201).json({ supplier: await createSupplier(ds, currentUser(req).id, body) });
+    res.status(201).json(presentSupplierResponse(await createSupplier(ds, currentUser(req).id, body)));
   });
 
   mount(r, 'PATCH /api/suppliers/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const body = parseBody(updateSupplierBodySchema, req);
-    res.json({ supplier: await updateSupplier(ds, currentUser(req).id, id, body) });
+    res.json(presentSupplierResponse(await updateSupplier(ds, currentUser(req).id, id, body)));
   });
 
   return r;

@@ -1,11 +1,10 @@
-import { outboxMessageSchema, type OutboxMessage } from '../../shared/schemas/auth';
+import { outboxResponseSchema, type OutboxMessage } from '../../shared/schemas/outbox';
 import { AppError } from '../errors';
-import { z } from 'zod';
 
 /** Reads the local mail catcher's messages; there is no outbox when a real SMTP server is used. */
 export async function readOutbox(catcherUrl: string | undefined): Promise<OutboxMessage[]> {
   if (!catcherUrl) throw new AppError(404, 'not_found', 'The outbox exists only while the local mail catcher is in use.');
   const res = await fetch(`${catcherUrl}/messages`);
   if (!res.ok) throw new AppError(503, 'unavailable', 'The local mail catcher did not answer.');
-  return z.object({ messages: z.array(outboxMessageSchema) }).parse(await res.json()).messages;
+  return outboxResponseSchema.parse(await res.json()).messages;
 }

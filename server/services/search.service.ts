@@ -3,26 +3,13 @@ import type { CompatSettings } from '../../shared/compat';
 import { looksLikePartNumber, normalizePartNumber } from '../../shared/part-number';
 import type { SearchHit, SearchQuery, SearchResponse } from '../../shared/schemas/search';
 import { exactNumberHits } from '../search/exact-number';
-import { FACET_ATTRIBUTES, type PartDocument } from '../search/part-document';
+import { FACET_ATTRIBUTES } from '../search/part-document';
 import { FACET_FIELDS } from '../../shared/schemas/search';
 import { buildFilters } from '../search/filters';
-import { matchReason } from '../search/match-reason';
 import type { PartSearchIndex } from '../search/search-index';
+import { presentInterchangeCheck } from '../presenters/part.presenter';
+import { presentSearchHit } from '../presenters/search.presenter';
 import { interchangeVerdict } from './compat/interchange-verdict.service';
-
-function toHit(doc: PartDocument, q: string): SearchHit {
-  return {
-    partId: doc.id,
-    brand: doc.brand,
-    partNumber: doc.partNumber,
-    kind: doc.kind,
-    description: doc.description,
-    ...matchReason(doc, q),
-    inStock: doc.inStock,
-    onHand: doc.onHand,
-    hasSpec: doc.hasSpec,
-  };
-}
 
 /**
  * The Counter's one search box: a number (ours, another brand's, a superseded one — with dashes,
@@ -54,11 +41,7 @@ async function withInterchangeChecks(ds: DataSource, hits: SearchHit[], settings
       );
       return {
         ...h,
-        check: check && {
-          verdict: check.verdict,
-          engine: check.engine,
-          concerns: check.concerns.map((c) => ({ id: c.id, verdict: c.verdict, reason: c.reason })),
-        },
+        check: check && presentInterchangeCheck(check),
       };
     }),
   );
@@ -90,7 +73,7 @@ export async function searchParts(
   return {
     hits: await withInterchangeChecks(
       ds,
-      res.hits.map((d) => toHit(d, raw)),
+      res.hits.map((d) => presentSearchHit(d, raw)),
       settings,
       query.engineId,
     ),

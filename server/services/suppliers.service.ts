@@ -1,7 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import type { Mapping } from '../../shared/price-list/mapping';
-import type { CreateSupplierBody, Supplier, UpdateSupplierBody } from '../../shared/schemas/price-list';
+import type { CreateSupplierBody, UpdateSupplierBody } from '../../shared/schemas/suppliers';
 import { AppError } from '../errors';
+import type { SupplierRecord } from '../presenters/supplier.presenter';
 import { audit } from './audit.service';
 
 const SUPPLIER_SELECT = `
@@ -11,32 +11,6 @@ SELECT s.id, s.key, s.name, s.contact_email, s.phone, s.mapping, s.created_at, l
     SELECT pl.id, pl.committed_at FROM price_list pl
      WHERE pl.supplier_id = s.id AND pl.status = 'committed' ORDER BY pl.committed_at DESC LIMIT 1
   ) last ON true`;
-
-interface SupplierRecord {
-  id: string;
-  key: string;
-  name: string;
-  contact_email: string | null;
-  phone: string | null;
-  mapping: Mapping | null;
-  created_at: Date;
-  last_id: string | null;
-  last_at: Date | null;
-}
-
-function present(r: SupplierRecord): Supplier {
-  return {
-    id: r.id,
-    key: r.key,
-    name: r.name,
-    contactEmail: r.contact_email,
-    phone: r.phone,
-    mapping: r.mapping,
-    lastPriceListAt: r.last_at?.toISOString() ?? null,
-    lastPriceListId: r.last_id,
-    createdAt: r.created_at.toISOString(),
-  };
-}
 
 /** "Brackwater Trade Supply" → "brackwater-trade-supply": the key when the buyer gives none. */
 export function supplierKeyFromName(name: string): string {
@@ -51,10 +25,10 @@ export function supplierKeyFromName(name: string): string {
   return slug || 'supplier';
 }
 
-async function one(m: EntityManager | DataSource, id: string): Promise<Supplier> {
+async function one(m: EntityManager | DataSource, id: string): Promise<SupplierRecord> {
   const rows = (await m.query(`${SUPPLIER_SELECT} WHERE s.id = $1`, [id])) as SupplierRecord[];
   if (!rows[0]) throw AppError.notFound('Supplier');
-  return present(rows[0]);
+  return rows[0];
 }
 
 function refuseDuplicate(err: unknown): never {
@@ -66,12 +40,11 @@ function refuseDuplicate(err: unknown): never {
   throw err;
 }
 
-export async function listSuppliers(ds: DataSource): Promise<Supplier[]> {
-  const rows = (await ds.query(`${SUPPLIER_SELECT} ORDER BY s.name`)) as SupplierRecord[];
-  return rows.map(present);
+export async function listSuppliers(ds: DataSource): Promise<SupplierRecord[]> {
+  return (await ds.query(`${SUPPLIER_SELECT} ORDER BY s.name`)) as SupplierRecord[];
 }
 
-export async function createSupplier(ds: DataSource, actorId: string, body: CreateSupplierBody): Promise<Supplier> {
+export async function createSupplier(ds: DataSource, actorId: string, body: CreateSupplierBody): Promise<SupplierRecord> {
   return ds
     .transaction(async (m) => {
       const rows = (await m.query(`INSERT INTO supplier (key, name, contact_email, phone) VALUES ($1, $2, $3, $4) RETURNING id`, [
@@ -95,7 +68,7 @@ const COLUMN_OF: Record<Exclude<keyof UpdateSupplierBody, 'mapping'>, string> = 
   phone: 'phone',
 };
 
-export async function updateSupplier(ds: DataSource, actorId: string, id: string, body: UpdateSupplierBody): Promise<Supplier> {
+export async function updateSupplier(ds: DataSource, actorId: string, id: string, body: UpdateSupplierBody): Promise<SupplierRecord> {
   return ds
     .transaction(async (m) => {
       const sets: string[] = [];

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import { IsNull } from 'typeorm';
-import { INVITE_TTL_HOURS, type AcceptInviteBody, type InviteBody, type UpdateUserBody } from '../../shared/schemas/auth';
+import { INVITE_TTL_HOURS, type AcceptInviteBody } from '../../shared/schemas/auth';
+import { type InviteBody, type UpdateUserBody } from '../../shared/schemas/users';
 import { InvitationEntity, ShopEntity, UserEntity } from '../entities';
 import { AppError } from '../errors';
 import type { JobQueue } from '../jobs/queue';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { fileText, NO_NUL_PATTERN } from '../schemas/text';
 import { FIELD_LABELS, HEADER_SYNONYMS, PRICE_LIST_FIELDS, PRICE_LIST_LIMITS, REQUIRED_FIELDS, type PriceListField } from './fields';
 
 /**
@@ -7,10 +8,12 @@ import { FIELD_LABELS, HEADER_SYNONYMS, PRICE_LIST_FIELDS, PRICE_LIST_LIMITS, RE
  * itself digits wins over the index reading. `null` leaves a column unused.
  */
 export const mappingSchema = z
-  .record(z.string().max(PRICE_LIST_LIMITS.maxHeaderChars), z.enum(PRICE_LIST_FIELDS).nullable())
+  .record(fileText(PRICE_LIST_LIMITS.maxHeaderChars), z.enum(PRICE_LIST_FIELDS).nullable())
   .refine((m) => Object.keys(m).length <= PRICE_LIST_LIMITS.maxColumns, {
     message: `at most ${PRICE_LIST_LIMITS.maxColumns} columns`,
-  });
+  })
+  // The document generator leaves a record's key schema out: say it here.
+  .meta({ propertyNames: { type: 'string', maxLength: PRICE_LIST_LIMITS.maxHeaderChars, pattern: NO_NUL_PATTERN.source } });
 export type Mapping = z.infer<typeof mappingSchema>;
 
 /** A mapping pinned to one file's columns: each mapped field's column index. */

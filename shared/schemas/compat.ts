@@ -1,6 +1,10 @@
 import { z } from 'zod';
+import { uuidSchema } from './common';
 import { coilSpecSchema, engineSpecSchema, resolvedPlugSpecSchema } from './specs';
-import { uuidSchema } from './catalog';
+
+/** Compare: an original against a substitute, coil or plug, on an engine (compat-model.md). */
+
+// ---------- requests ----------
 
 /** A coil or plug given by its part in the catalog, or by a spec typed in (a part we do not stock, a measured coil). */
 export const coilRefSchema = z.union([z.object({ partId: uuidSchema }).strict(), z.object({ spec: coilSpecSchema }).strict()]);
@@ -22,18 +26,35 @@ export const plugCompareBodySchema = z.object({
 });
 export type PlugCompareBody = z.infer<typeof plugCompareBodySchema>;
 
+// ---------- responses ----------
+
 export const VERDICTS = ['go', 'review', 'no-go'] as const;
 export const verdictSchema = z.enum(VERDICTS);
 
-export const checkSchema = z.object({
-  id: z.string(),
-  verdict: verdictSchema,
-  original: z.union([z.number(), z.string(), z.null()]),
-  substitute: z.union([z.number(), z.string(), z.null()]),
-  unit: z.string(),
-  reason: z.string(),
-});
+export const checkSchema = z
+  .object({
+    id: z.string(),
+    verdict: verdictSchema,
+    original: z.union([z.number(), z.string(), z.null()]),
+    substitute: z.union([z.number(), z.string(), z.null()]),
+    unit: z.string(),
+    reason: z.string(),
+  })
+  .meta({ id: 'CheckRow' });
 export type CheckRow = z.infer<typeof checkSchema>;
+
+/**
+ * A claim of equivalence judged: the foreign part's own spec against ours, on the engine named.
+ * `concerns` are the checks that are not go, with their reasons.
+ */
+export const interchangeCheckSchema = z
+  .object({
+    verdict: verdictSchema,
+    concerns: z.array(checkSchema.pick({ id: true, verdict: true, reason: true })),
+    engine: z.string(),
+  })
+  .meta({ id: 'InterchangeCheck' });
+export type InterchangeCheck = z.infer<typeof interchangeCheckSchema>;
 
 export const loadPointSchema = z.object({
   name: z.enum(['idle', 'cruise', 'full', 'boost']),
@@ -48,87 +69,33 @@ export const loadPointSchema = z.object({
 const currentSampleSchema = z.object({ tMs: z.number(), amps: z.number() });
 const curvePairSchema = z.object({ original: z.array(currentSampleSchema), substitute: z.array(currentSampleSchema) });
 
-export const sideLabelSchema = z.object({ label: z.string(), partId: z.string().nullable() });
+export const sideLabelSchema = z.object({ label: z.string(), partId: uuidSchema.nullable() });
+export type SideLabel = z.infer<typeof sideLabelSchema>;
 
-export const compatResultSchema = z.object({
-  kind: z.enum(['coil', 'plug']),
-  verdict: verdictSchema,
-  checks: z.array(checkSchema),
-  loadPoints: z.array(loadPointSchema),
-  /** The original's own load points, for the chart's second line. */
-  originalLoadPoints: z.array(loadPointSchema),
-  /** Coils only: primary current at charging voltage over 0 … 1.5 × running dwell. */
-  currents: curvePairSchema.optional(),
-  /** Coils only: the same at cranking voltage over 0 … 1.5 × cranking dwell. */
-  crankingCurrents: curvePairSchema.optional(),
-  energyMj: z.object({ original: z.number(), substitute: z.number() }).optional(),
-  driverLimitA: z.number().nullable().optional(),
-  dwellMs: z.number().optional(),
-  crankingDwellMs: z.number().optional(),
-  original: sideLabelSchema,
-  substitute: sideLabelSchema,
-  engine: z.object({ label: z.string(), engineId: z.string().nullable() }),
-  cautions: z.array(z.string()),
-});
+/** POST /api/compat/coil and /api/compat/plug; also the `result` of a fit report. */
+export const compatResultSchema = z
+  .object({
+    kind: z.enum(['coil', 'plug']),
+    verdict: verdictSchema,
+    checks: z.array(checkSchema),
+    loadPoints: z.array(loadPointSchema),
+    /** The original's own load points, for the chart's second line. */
+    originalLoadPoints: z.array(loadPointSchema),
+    /** Coils only: primary current at charging voltage over 0 … 1.5 × running dwell. */
+    currents: curvePairSchema.optional(),
+    /** Coils only: the same at cranking voltage over 0 … 1.5 × cranking dwell. */
+    crankingCurrents: curvePairSchema.optional(),
+    energyMj: z.object({ original: z.number(), substitute: z.number() }).optional(),
+    driverLimitA: z.number().nullable().optional(),
+    dwellMs: z.number().optional(),
+    crankingDwellMs: z.number().optional(),
+    original: sideLabelSchema,
+    substitute: sideLabelSchema,
+    engine: z.object({ label: z.string(), engineId: uuidSchema.nullable() }),
+    cautions: z.array(z.string()),
+  })
+  .meta({ id: 'CompatResult' });
 export type CompatResult = z.infer<typeof compatResultSchema>;
-
-export const alternatesQuerySchema = z.object({
-  kind: z.enum(['coil', 'plug']),
-  all: z.enum(['1', 'true', '0', 'false']).optional(),
-});
-
-export const benchBodySchema = z.union([
-  z.object({
-    partId: uuidSchema,
-    measured: z.object({
-      primaryOhm: z.number().min(0).nullable(),
-      secondaryKohm: z.number().min(0).nullable().optional(),
-      temperatureC: z.number().min(-40).max(150),
-    }),
-  }),
-  z.object({
-    spec: coilSpecSchema,
-    measured: z.object({
-      primaryOhm: z.number().min(0).nullable(),
-      secondaryKohm: z.number().min(0).nullable().optional(),
-      temperatureC: z.number().min(-40).max(150),
-    }),
-  }),
-]);
-export type BenchBody = z.infer<typeof benchBodySchema>;
-
-export const fitReportBodySchema = z.discriminatedUnion('kind', [
-  z.object({
-    kind: z.literal('coil'),
-    title: z.string().trim().max(120).optional(),
-    notes: z.string().max(2000).optional(),
-    inputs: coilCompareBodySchema,
-  }),
-  z.object({
-    kind: z.literal('plug'),
-    title: z.string().trim().max(120).optional(),
-    notes: z.string().max(2000).optional(),
-    inputs: plugCompareBodySchema,
-  }),
-]);
-export type FitReportBody = z.infer<typeof fitReportBodySchema>;
-
-export const fitReportSchema = z.object({
-  id: z.string(),
-  kind: z.enum(['coil', 'plug']),
-  title: z.string(),
-  notes: z.string(),
-  verdict: verdictSchema,
-  createdAt: z.string(),
-  createdBy: z.string(),
-  shopName: z.string().nullable(),
-  inputs: z.unknown(),
-  result: compatResultSchema,
-  shareUrl: z.string(),
-});
-export type FitReport = z.infer<typeof fitReportSchema>;
-
-export const emailFitReportBodySchema = z.object({ to: z.string().trim().toLowerCase().pipe(z.email()) });
 
 /** The cautions of the product, shown on Compare, Bench test and every fit report. */
 export const CAUTIONS = [

@@ -1,5 +1,8 @@
 import { z } from 'zod';
+import { uuidSchema } from './common';
+import { interchangeCheckSchema } from './compat';
 import { COIL_ARCHITECTURES, COIL_DRIVERS, PART_KINDS, PLUG_SEATS } from './specs';
+import { text } from './text';
 
 export const SEARCH_LIMIT_MAX = 100;
 export const MATCHED_BY = ['number', 'interchange', 'supersession', 'gtin', 'text', 'vehicle'] as const;
@@ -10,11 +13,11 @@ const num = z.coerce.number().finite();
 
 /** The spec facets a clerk can filter on, by their spec field names. */
 export const searchFacetQuerySchema = z.object({
-  brand: z.string().max(80).optional(),
+  brand: text({ max: 80 }).optional(),
   architecture: z.enum(COIL_ARCHITECTURES).optional(),
   driver: z.enum(COIL_DRIVERS).optional(),
   connectorPins: z.coerce.number().int().optional(),
-  connectorKey: z.string().max(40).optional(),
+  connectorKey: text({ max: 40 }).optional(),
   /** A measured or quoted primary resistance: coils whose window contains it. */
   primaryOhm: num.optional(),
   threadMm: num.optional(),
@@ -28,37 +31,32 @@ export const searchFacetQuerySchema = z.object({
 export const FACET_FIELDS = Object.keys(searchFacetQuerySchema.shape) as (keyof z.infer<typeof searchFacetQuerySchema>)[];
 
 export const searchQuerySchema = searchFacetQuerySchema.extend({
-  q: z.string().max(200).default(''),
+  q: text({ max: 200 }).default(''),
   kind: z.enum(PART_KINDS).optional(),
   limit: z.coerce.number().int().min(1).max(SEARCH_LIMIT_MAX).default(20),
   offset: z.coerce.number().int().min(0).max(10_000).default(0),
   /** The vehicle's engine the clerk picked: interchange claims are judged on it. */
-  engineId: z.string().uuid().optional(),
+  engineId: uuidSchema.optional(),
 });
 export type SearchQuery = z.infer<typeof searchQuerySchema>;
 
-export const searchHitSchema = z.object({
-  partId: z.string(),
-  brand: z.string(),
-  partNumber: z.string(),
-  kind: z.enum(PART_KINDS),
-  description: z.string(),
-  matchedBy: z.enum(MATCHED_BY),
-  matchedNumber: z.string().nullable(),
-  inStock: z.boolean(),
-  /** The store's count: absent for technicians, who see in stock yes/no only. */
-  onHand: z.number().int().optional(),
-  hasSpec: z.boolean(),
-  /** For a hit found through interchange: the verdict of the foreign part's spec against ours. */
-  check: z
-    .object({
-      verdict: z.enum(['go', 'review', 'no-go']),
-      concerns: z.array(z.object({ id: z.string(), verdict: z.enum(['go', 'review', 'no-go']), reason: z.string() })),
-      engine: z.string(),
-    })
-    .nullable()
-    .optional(),
-});
+export const searchHitSchema = z
+  .object({
+    partId: uuidSchema,
+    brand: z.string(),
+    partNumber: z.string(),
+    kind: z.enum(PART_KINDS),
+    description: z.string(),
+    matchedBy: z.enum(MATCHED_BY),
+    matchedNumber: z.string().nullable(),
+    inStock: z.boolean(),
+    /** The store's count: absent for technicians, who see in stock yes/no only. */
+    onHand: z.number().int().optional(),
+    hasSpec: z.boolean(),
+    /** For a hit found through interchange: the verdict of the foreign part's spec against ours. */
+    check: interchangeCheckSchema.nullable().optional(),
+  })
+  .meta({ id: 'SearchHit' });
 export type SearchHit = z.infer<typeof searchHitSchema>;
 
 export const searchResponseSchema = z.object({

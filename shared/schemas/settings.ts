@@ -15,7 +15,14 @@ export const DEFAULT_PRICE_LIST_SETTINGS: PriceListSettings = {
   maxFileMb: PRICE_LIST_LIMITS.maxFileBytes / (1024 * 1024),
 };
 
-export const settingsSchema = z.object({ compat: compatSettingsSchema, priceList: priceListSettingsSchema });
+export const settingsSchema = z.object({ compat: compatSettingsSchema, priceList: priceListSettingsSchema }).meta({ id: 'Settings' });
 export type Settings = z.infer<typeof settingsSchema>;
 
 export const DEFAULT_SETTINGS: Settings = { compat: DEFAULT_COMPAT_SETTINGS, priceList: DEFAULT_PRICE_LIST_SETTINGS };
+
+/** GET and PUT /api/settings. */
+export const settingsResponseSchema = z.object({ settings: settingsSchema });
+export type SettingsResponse = z.infer<typeof settingsResponseSchema>;
+
+export const updateSettingsBodySchema = settingsResponseSchema;
+export type UpdateSettingsBody = z.infer<typeof updateSettingsBodySchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 
 /**
  * Spec fields of coils, plugs and engines, in the units the trade prints them in
@@ -24,7 +25,7 @@ export const coilSpecSchema = z
     driver: z.enum(COIL_DRIVERS),
     outputs: z.number().int().min(1).max(12),
     connectorPins: z.number().int().min(1).max(12),
-    connectorKey: z.string().trim().min(1).max(40),
+    connectorKey: text({ min: 1, max: 40 }),
     primaryOhmMin: positive(100),
     primaryOhmMax: positive(100),
     primaryInductanceMh: positive(100),
@@ -57,7 +58,8 @@ export const coilSpecSchema = z
         message: 'secondaryKohmMin must not exceed secondaryKohmMax',
       });
     }
-  });
+  })
+  .meta({ id: 'CoilSpec' });
 export type CoilSpec = z.infer<typeof coilSpecSchema>;
 
 /** A plug spec as stored: the brand's own heat code, mapped to a heat step by the brand's table. */
@@ -76,22 +78,29 @@ export const plugSpecFields = {
 };
 export const heatStepSchema = z.number().int().min(HEAT_STEP_MIN).max(HEAT_STEP_MAX);
 
-export const plugSpecSchema = z.object({
-  ...plugSpecFields,
-  heatCode: z.string().trim().min(1).max(20),
-});
+/** A brand's printed heat code ("6", "BR7"). */
+export const heatCodeSchema = text({ min: 1, max: 20 });
+
+export const plugSpecSchema = z
+  .object({
+    ...plugSpecFields,
+    heatCode: heatCodeSchema,
+  })
+  .meta({ id: 'PlugSpec' });
 export type PlugSpec = z.infer<typeof plugSpecSchema>;
 
 /** A plug spec with its heat step resolved: what the compatibility model works on. */
-export const resolvedPlugSpecSchema = z.object({
-  ...plugSpecFields,
-  heatCode: z.string().trim().min(1).max(20).nullable().optional(),
-  heatStep: heatStepSchema,
-});
+export const resolvedPlugSpecSchema = z
+  .object({
+    ...plugSpecFields,
+    heatCode: heatCodeSchema.nullable().optional(),
+    heatStep: heatStepSchema,
+  })
+  .meta({ id: 'ResolvedPlugSpec' });
 export type ResolvedPlugSpec = z.infer<typeof resolvedPlugSpecSchema>;
 
 export const engineSpecSchema = z.object({
-  code: z.string().trim().min(1).max(40),
+  code: text({ min: 1, max: 40 }),
   displacementL: z.number().positive().max(20),
   cylinders: z.number().int().min(1).max(16),
   compressionRatio: z.number().min(4).max(20),
@@ -106,3 +115,8 @@ export const engineSpecSchema = z.object({
 export type EngineSpec = z.infer<typeof engineSpecSchema>;
 export type EngineSpecInput = z.input<typeof engineSpecSchema>;
 export type PartKind = (typeof PART_KINDS)[number];
+
+/** A part's spec, whichever kind it is: what the catalog answers with. */
+export const partSpecSchema = z.union([coilSpecSchema, resolvedPlugSpecSchema]);
+export type PartSpec = CoilSpec | ResolvedPlugSpec;
+export const isCoilSpec = (spec: PartSpec): spec is CoilSpec => 'architecture' in spec;

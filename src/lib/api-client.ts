@@ -1,3 +1,4 @@
+import { csrfResponseSchema } from '@shared/schemas/auth';
 import { errorBodySchema } from '@shared/schemas/error';
 import type { z } from 'zod';
 
@@ -24,9 +25,9 @@ export function setUnauthorizedHandler(fn: () => void): void {
 
 async function fetchCsrfToken(): Promise<string> {
   const res = await fetch('/api/auth/csrf', { credentials: 'same-origin' });
-  const body = (await res.json()) as { token: string };
-  csrfToken = body.token;
-  return body.token;
+  const { token } = csrfResponseSchema.parse(await res.json());
+  csrfToken = token;
+  return token;
 }
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';

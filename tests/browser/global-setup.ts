@@ -7,6 +7,7 @@ import type { TestProject } from 'vitest/node';
 import { createApp } from '../../server/app';
 import { buildDeps, closeDeps } from '../../server/bootstrap';
 import { loadEnv } from '../../server/config/env';
+import { takeResponseMismatches } from '../../server/openapi/response-check';
 import { startLocalServices } from '../../server/local-services';
 import { seedAll } from '../../seed/seed-all';
 
@@ -56,5 +57,8 @@ export default async function setup(project: TestProject): Promise<() => Promise
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await closeDeps(deps);
     await local.close();
+    // The journeys' answers were held against the API document too (NODE_ENV test).
+    const mismatches = takeResponseMismatches();
+    if (mismatches.length) throw new Error(`answers that do not match the API document: ${JSON.stringify(mismatches, null, 2)}`);
   };
 }

@@ -3,7 +3,8 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { priceListHistorySchema, supplierSchema } from '@shared/schemas/price-list';
+import { priceListHistorySchema } from '@shared/schemas/price-lists';
+import { supplierSchema } from '@shared/schemas/suppliers';
 import { openBrowser, signInAs, type BrowserSession } from './browser';
 
 const CLEAN = path.resolve(import.meta.dirname, '../../seed/csv/supplier-a-clean.csv');

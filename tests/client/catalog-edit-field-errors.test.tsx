@@ -3,13 +3,14 @@ import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-li
 import { MemoryRouter, Outlet, Route, Routes } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { User } from '@shared/schemas/auth';
-import type { PartSummary } from '@shared/schemas/catalog';
+import type { PartSummary } from '@shared/schemas/parts';
 import { CatalogPage } from '@/app/routes/catalog/catalog';
 
 // Fixtures shaped as the API answers them; the page parses every answer with its schemas.
 const PLUG_ID = '11111111-1111-4111-8111-111111111111';
 const COIL_ID = '22222222-2222-4222-8222-222222222222';
 const NEXT_ID = '33333333-3333-4333-8333-333333333333';
+const BRAND_ID = '44444444-4444-4444-8444-444444444444';
 
 const summary = (id: string, partNumber: string, kind: 'coil' | 'plug', hasSpec: boolean): PartSummary => ({
   id,
@@ -50,7 +51,7 @@ const detail = (part: PartSummary, spec: unknown) => ({
 const BRANDS = {
   brands: [
     {
-      id: 'b1',
+      id: BRAND_ID,
       name: 'Quaywell',
       ours: true,
       heatCodeNote: 'Numbered 4–12; a higher number is a colder plug.',

@@ -121,7 +121,14 @@ describe('the heat-table editor', () => {
   });
 
   it('sends the brand with its table through the API, with the CSRF token, and says what was added', async () => {
-    const sent = stubApi(() => ({ status: 201, body: { brand: { id: 'b1', name: 'Tamsin Plugs' } } }));
+    const brand = {
+      id: '44444444-4444-4444-8444-444444444444',
+      name: 'Tamsin Plugs',
+      ours: true,
+      heatCodeNote: 'Numbered 5–7; a higher number is a colder plug.',
+      heatCodes: [5, 6, 7].map((n) => ({ code: String(n), heatStep: n + 1 })),
+    };
+    const sent = stubApi(() => ({ status: 201, body: { brand } }));
     const form = renderForm();
     set(form, 'Brand name', 'Tamsin Plugs');
     fireEvent.click(within(form).getByLabelText(/One of our lines/));

@@ -4,8 +4,20 @@ import { MemoryRouter, Outlet, Route, Routes } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '@shared/roles';
 import type { User } from '@shared/schemas/auth';
-import type { PartSummary } from '@shared/schemas/catalog';
+import type { PartSummary } from '@shared/schemas/parts';
 import { CounterPage } from '@/app/routes/counter/counter';
+
+// Ids as the API writes them (UUIDs).
+const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
+const [SUPPLIER, ENGINE_ID, C1, P1, P2, A1, A2] = [1, 2, 3, 4, 5, 6, 7].map(uuid) as [
+  string,
+  string,
+  string,
+  string,
+  string,
+  string,
+  string,
+];
 
 // Fixtures shaped as the API answers (the client parses every answer with the shared schemas).
 const part = (id: string, partNumber: string, kind: 'coil' | 'plug', hasSpec = true): PartSummary => ({
@@ -21,7 +33,7 @@ const part = (id: string, partNumber: string, kind: 'coil' | 'plug', hasSpec = t
   hasSpec,
 });
 const price = (listCents: number) => ({
-  supplierId: 's1',
+  supplierId: SUPPLIER,
   supplier: 'Pellworth Distribution',
   listCents,
   coreCents: 0,
@@ -45,7 +57,7 @@ const coilSpec = {
 };
 const ENGINE = {
   engine: {
-    id: 'e18',
+    id: ENGINE_ID,
     code: 'VK18',
     description: '1.8 L inline-4',
     displacementL: 1.8,
@@ -62,7 +74,7 @@ const ENGINE = {
   },
   fitments: [
     {
-      part: part('c1', 'QW-IC 3101', 'coil'),
+      part: part(C1, 'QW-IC 3101', 'coil'),
       spec: coilSpec,
       position: 'ignition coil',
       quantity: 4,
@@ -105,10 +117,10 @@ function stubApi(extra: Record<string, unknown> = {}) {
     '/api/vehicles/years': { years: [2013, 2012] },
     '/api/vehicles/makes': { makes: ['Varrick'] },
     '/api/vehicles/models': { models: ['Halvard'] },
-    '/api/vehicles/engines': { engines: [{ id: 'e18', code: 'VK18', label: '1.8 L 4-cyl (VK18) — Plus' }] },
-    '/api/engines/e18': ENGINE,
-    '/api/search': { hits: [searchHit('p1', 'QW-SP 1406'), searchHit('p2', 'QW-SP 9999', false)], total: 2, facets: {} },
-    '/api/parts/p2': partDetail(part('p2', 'QW-SP 9999', 'plug', false), null, [price(999)]),
+    '/api/vehicles/engines': { engines: [{ id: ENGINE_ID, code: 'VK18', label: '1.8 L 4-cyl (VK18) — Plus' }] },
+    [`/api/engines/${ENGINE_ID}`]: ENGINE,
+    '/api/search': { hits: [searchHit(P1, 'QW-SP 1406'), searchHit(P2, 'QW-SP 9999', false)], total: 2, facets: {} },
+    [`/api/parts/${P2}`]: partDetail(part(P2, 'QW-SP 9999', 'plug', false), null, [price(999)]),
     ...extra,
   };
   vi.stubGlobal(
@@ -200,7 +212,7 @@ describe('Counter page', () => {
 
   it('shows cost and margin per supplier when the server sends them (buyer)', async () => {
     stubApi({
-      '/api/parts/p2': partDetail(part('p2', 'QW-SP 9999', 'plug', false), null, [{ ...price(999), costCents: 400, marginPct: 60 }]),
+      [`/api/parts/${P2}`]: partDetail(part(P2, 'QW-SP 9999', 'plug', false), null, [{ ...price(999), costCents: 400, marginPct: 60 }]),
     });
     renderCounter('buyer');
     fireEvent.change(screen.getByLabelText('Number, words or barcode'), { target: { value: 'QW-SP' } });
@@ -227,7 +239,7 @@ describe('Counter page', () => {
     fireEvent.change(model, { target: { value: 'Halvard' } });
     const engine = screen.getByLabelText('Engine');
     await within(engine).findByRole('option', { name: /VK18/ });
-    fireEvent.change(engine, { target: { value: 'e18' } });
+    fireEvent.change(engine, { target: { value: ENGINE_ID } });
 
     const coil = await screen.findByRole('region', { name: 'Fitted ignition coil' });
     await within(coil).findByRole('button', { name: 'QW-IC 3101' });
@@ -235,7 +247,7 @@ describe('Counter page', () => {
     expect(coil.textContent).toContain('$49.99');
     // The alternates route answers 404 here: the slot says so instead of failing the page.
     await within(coil).findByText('Ranked alternates are not available yet.');
-    expect(calls.find((c) => c.url.pathname === '/api/engines/e18/alternates')!.url.searchParams.get('kind')).toBe('coil');
+    expect(calls.find((c) => c.url.pathname === `/api/engines/${ENGINE_ID}/alternates`)!.url.searchParams.get('kind')).toBe('coil');
 
     // Changing the year clears what follows it.
     fireEvent.change(year, { target: { value: '2013' } });
@@ -247,12 +259,16 @@ describe('Counter page', () => {
     const alternate = (id: string, partNumber: string, verdict: 'go' | 'review' | 'no-go') => ({
       part: part(id, partNumber, 'coil'),
       verdict,
+      deviation: 0,
       checks: [{ id: 'connector', verdict, original: 'A', substitute: 'C', unit: '', reason: `Connector ${verdict}.` }],
       inStock: true,
       price: price(5299),
     });
     const calls = stubApi({
-      '/api/engines/e18/alternates': { alternates: [alternate('a1', 'QW-IC 3102', 'go'), alternate('a2', 'QW-IC 3104', 'review')] },
+      [`/api/engines/${ENGINE_ID}/alternates`]: {
+        original: part(C1, 'QW-IC 3101', 'coil'),
+        alternates: [alternate(A1, 'QW-IC 3102', 'go'), alternate(A2, 'QW-IC 3104', 'review')],
+      },
     });
     renderCounter();
     await within(screen.getByLabelText('Year')).findByRole('option', { name: '2012' });
@@ -262,7 +278,7 @@ describe('Counter page', () => {
     await within(screen.getByLabelText('Model')).findByRole('option', { name: 'Halvard' });
     fireEvent.change(screen.getByLabelText('Model'), { target: { value: 'Halvard' } });
     await within(screen.getByLabelText('Engine')).findByRole('option', { name: /VK18/ });
-    fireEvent.change(screen.getByLabelText('Engine'), { target: { value: 'e18' } });
+    fireEvent.change(screen.getByLabelText('Engine'), { target: { value: ENGINE_ID } });
 
     const list = await screen.findByRole('list', { name: 'coil alternates' });
     const items = within(list).getAllByRole('listitem');
@@ -271,12 +287,14 @@ describe('Counter page', () => {
     expect(within(items[1]!).getByText('review')).toBeTruthy();
     expect(within(items[1]!).getByText('Connector review.')).toBeTruthy();
     expect(within(items[0]!).getByRole('link', { name: 'Compare' }).getAttribute('href')).toBe(
-      '/compare?original=c1&substitute=a1&engine=e18',
+      `/compare?original=${C1}&substitute=${A1}&engine=${ENGINE_ID}`,
     );
 
     fireEvent.click(screen.getByLabelText('show no-go too'));
     await vi.waitFor(() =>
-      expect(calls.some((c) => c.url.pathname === '/api/engines/e18/alternates' && c.url.searchParams.get('all') === '1')).toBe(true),
+      expect(calls.some((c) => c.url.pathname === `/api/engines/${ENGINE_ID}/alternates` && c.url.searchParams.get('all') === '1')).toBe(
+        true,
+      ),
     );
   });
 });

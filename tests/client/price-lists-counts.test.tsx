@@ -2,7 +2,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { PriceList, PriceListCounts } from '@shared/schemas/price-list';
+import type { PriceList, PriceListCounts } from '@shared/schemas/price-lists';
 import { PriceMove } from '@/features/price-lists/components/change-table';
 import { PriceListIntake } from '@/features/price-lists/components/intake';
 import { PreviewCounts } from '@/features/price-lists/components/preview-counts';

@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { PriceList } from '@shared/schemas/price-list';
+import type { PriceList } from '@shared/schemas/price-lists';
 import { newUploadId, uploadPriceList, type UploadProgress } from '@/features/price-lists/api/upload-price-list';
 import { ApiError } from '@/lib/api-client';
 

@@ -1,5 +1,5 @@
 import { inject } from 'vitest';
-import type { OutboxMessage } from '../../shared/schemas/auth';
+import type { OutboxMessage } from '../../shared/schemas/outbox';
 
 /** Messages the real SMTP catcher received, newest first. */
 export async function caughtMail(): Promise<OutboxMessage[]> {

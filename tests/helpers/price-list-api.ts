@@ -5,7 +5,8 @@ import type { DataSource } from 'typeorm';
 import { expect } from 'vitest';
 import { supplierPrices } from '../../seed/data/suppliers';
 import type { Mapping } from '../../shared/price-list/mapping';
-import type { PriceList, Supplier } from '../../shared/schemas/price-list';
+import type { PriceList } from '../../shared/schemas/price-lists';
+import type { Supplier } from '../../shared/schemas/suppliers';
 import type { Agent } from './test-app';
 
 export interface Signed {

@@ -1,6 +1,8 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { normalizePartNumber } from '../../../shared/part-number';
-import type { CreateBrandBody, CreateInterchangeBody, CreatePartBody, UpdatePartBody } from '../../../shared/schemas/catalog';
+import type { CreateBrandBody } from '../../../shared/schemas/brands';
+import type { CreateInterchangeBody } from '../../../shared/schemas/interchange';
+import type { CreatePartBody, UpdatePartBody } from '../../../shared/schemas/parts';
 import type { CoilSpec, PlugSpec } from '../../../shared/schemas/specs';
 import { AppError } from '../../errors';
 import type { JobQueue } from '../../jobs/queue';

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import type { VehicleEngineRecord } from '../../presenters/vehicle.presenter';
 
 /** The vehicle picker's lists: year → make → model → engine, each from the vehicles on file. */
 export async function listYears(ds: DataSource): Promise<number[]> {
@@ -18,22 +19,12 @@ export async function listModels(ds: DataSource, year: number, make: string): Pr
   return rows.map((r) => r.model);
 }
 
-export async function listEngines(
-  ds: DataSource,
-  year: number,
-  make: string,
-  model: string,
-): Promise<{ id: string; code: string; label: string }[]> {
-  const rows = (await ds.query(
+export async function listEngines(ds: DataSource, year: number, make: string, model: string): Promise<VehicleEngineRecord[]> {
+  return (await ds.query(
     `SELECT e.id, e.code, e.displacement_l, e.cylinders, e.aspiration, string_agg(DISTINCT v.trim, ', ' ORDER BY v.trim) AS trims
        FROM vehicle v JOIN engine e ON e.id = v.engine_id
       WHERE v.year = $1 AND v.make = $2 AND v.model = $3
       GROUP BY e.id ORDER BY e.displacement_l, e.code`,
     [year, make, model],
-  )) as { id: string; code: string; displacement_l: number; cylinders: number; aspiration: string; trims: string }[];
-  return rows.map((r) => ({
-    id: r.id,
-    code: r.code,
-    label: `${r.displacement_l.toFixed(1)} L ${r.cylinders}-cyl${r.aspiration === 'natural' ? '' : ` ${r.aspiration}`} (${r.code}) — ${r.trims}`,
-  }));
+  )) as VehicleEngineRecord[];
 }

@@ -1,11 +1,10 @@
 import type { DataSource } from 'typeorm';
 import { prepareCoilComparison, preparePlugComparison, rankAlternates, type CompatSettings, type Verdict } from '../../../shared/compat';
-import type { Role } from '../../../shared/roles';
-import type { CheckRow } from '../../../shared/schemas/compat';
+import type { Check } from '../../../shared/compat';
 import type { CoilSpec, ResolvedPlugSpec } from '../../../shared/schemas/specs';
 import { AppError } from '../../errors';
-import { presentPart } from '../../presenters/part.presenter';
-import { sellPrice } from '../../presenters/stock-price.presenter';
+import type { AlternatesRecord } from '../../presenters/alternates.presenter';
+import { sellPriceRow } from '../../presenters/stock-price.presenter';
 import { engineSpecOf, loadEngine, loadPartRows, loadPrices, loadSpecs, loadStock } from '../catalog/part-loader';
 import { asBadRequest } from './compare.service';
 import { fittedPartId } from './resolve';
@@ -30,9 +29,8 @@ export async function engineAlternates(
   engineId: string,
   kind: 'coil' | 'plug',
   includeNoGo: boolean,
-  role: Role,
   settings: CompatSettings,
-) {
+): Promise<AlternatesRecord> {
   const engine = await loadEngine(ds, engineId);
   if (!engine) throw AppError.notFound('Engine');
   const engineSpec = engineSpecOf(engine);
@@ -42,12 +40,12 @@ export async function engineAlternates(
   const specs = await loadSpecs(ds, [originalId, ...ids]);
   const originalSpec = specs.get(originalId);
   const [rows, stock, prices] = await Promise.all([loadPartRows(ds, [originalId, ...ids]), loadStock(ds, ids), loadPrices(ds, ids)]);
-  const original = presentPart(rows.get(originalId)!);
+  const original = rows.get(originalId)!;
   if (!originalSpec?.coil && !originalSpec?.plug) return { original, alternates: [] };
 
   type Judged = { verdict: Verdict; deviation: number };
   let judge: (id: string) => Judged | null;
-  let explain: (id: string) => CheckRow[];
+  let explain: (id: string) => Check[];
   if (kind === 'coil') {
     const comparer = asBadRequest(() => prepareCoilComparison({ original: originalSpec.coil as CoilSpec, engine: engineSpec, settings }));
     judge = (id) => {
@@ -72,19 +70,19 @@ export async function engineAlternates(
   const candidates = ids.flatMap((id) => {
     const result = judge(id);
     if (!result) return [];
-    const price = sellPrice(prices.get(id) ?? [], role);
-    return [{ id, result, inStock: (stock.get(id)?.onHand ?? 0) > 0, priceCents: price?.listCents ?? null, price }];
+    const partPrices = prices.get(id) ?? [];
+    return [{ id, result, inStock: (stock.get(id)?.onHand ?? 0) > 0, priceCents: sellPriceRow(partPrices)?.listCents ?? null, partPrices }];
   });
   const ranked = rankAlternates(candidates, { includeNoGo });
   return {
     original,
     alternates: ranked.map((c) => ({
-      part: presentPart(rows.get(c.id)!),
+      row: rows.get(c.id)!,
       verdict: c.result.verdict,
       deviation: c.result.deviation,
       checks: explain(c.id),
       inStock: c.inStock,
-      price: c.price,
+      prices: c.partPrices,
     })),
   };
 }

@@ -2,49 +2,19 @@ import { randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import { checkLabel, type CompatSettings } from '../../../shared/compat';
 import type { User } from '../../../shared/schemas/auth';
-import { CAUTIONS, type CompatResult, type FitReport, type FitReportBody } from '../../../shared/schemas/compat';
+import { CAUTIONS } from '../../../shared/schemas/compat';
+import type { FitReportBody } from '../../../shared/schemas/fit-reports';
 import { AppError } from '../../errors';
 import type { JobQueue } from '../../jobs/queue';
 import { escapeHtml, type OutgoingMail } from '../../mail/mailer';
+import { presentCoilComparison, presentPlugComparison } from '../../presenters/compat.presenter';
+import { presentFitReport, type FitReportRecord } from '../../presenters/fit-report.presenter';
 import { audit } from '../audit.service';
 import { compareCoilRequest, comparePlugRequest } from './compare.service';
-
-interface FitReportRow {
-  id: string;
-  kind: 'coil' | 'plug';
-  title: string;
-  notes: string;
-  inputs: unknown;
-  result: CompatResult;
-  verdict: FitReport['verdict'];
-  share_token: string;
-  created_at: Date;
-  created_by_name: string;
-  shop_id: string | null;
-  shop_name: string | null;
-}
 
 const SELECT = `SELECT r.id, r.kind, r.title, r.notes, r.inputs, r.result, r.verdict, r.share_token, r.created_at, r.shop_id,
                        u.name AS created_by_name, s.name AS shop_name
                   FROM fit_report r JOIN "user" u ON u.id = r.created_by LEFT JOIN shop s ON s.id = r.shop_id`;
-
-export const shareUrlOf = (appUrl: string, token: string) => `${appUrl}/shared/fit-reports/${token}`;
-
-function present(r: FitReportRow, appUrl: string): FitReport {
-  return {
-    id: r.id,
-    kind: r.kind,
-    title: r.title,
-    notes: r.notes,
-    verdict: r.verdict,
-    createdAt: r.created_at.toISOString(),
-    createdBy: r.created_by_name,
-    shopName: r.shop_name,
-    inputs: r.inputs,
-    result: r.result,
-    shareUrl: shareUrlOf(appUrl, r.share_token),
-  };
-}
 
 /** A technician sees only its own shop's reports; the store's staff see every report. */
 function visibleTo(user: User, r: { shop_id: string | null }): boolean {
@@ -58,11 +28,12 @@ export class FitReportService {
   ) {}
 
   /** The verdict is recomputed here from the inputs: a client's verdict is never trusted. */
-  async create(user: User, body: FitReportBody, settings: CompatSettings): Promise<FitReport> {
+  async create(user: User, body: FitReportBody, settings: CompatSettings): Promise<FitReportRecord> {
+    // The report keeps the result as it was shown that day: later changes to the model or the settings do not rewrite it.
     const result =
       body.kind === 'coil'
-        ? await compareCoilRequest(this.ds, body.inputs, settings)
-        : await comparePlugRequest(this.ds, body.inputs, settings);
+        ? presentCoilComparison(await compareCoilRequest(this.ds, body.inputs, settings))
+        : presentPlugComparison(await comparePlugRequest(this.ds, body.inputs, settings));
     const token = randomBytes(24).toString('base64url');
     const title = body.title?.trim() || `${result.substitute.label} for ${result.original.label} on ${result.engine.label.split(' — ')[0]}`;
     const id = await this.ds.transaction(async (m) => {
@@ -93,33 +64,24 @@ export class FitReportService {
     return this.get(user, id);
   }
 
-  async list(user: User) {
-    const rows = (await this.ds.query(`${SELECT} WHERE ($1::uuid IS NULL OR r.shop_id = $1) ORDER BY r.created_at DESC LIMIT 200`, [
+  async list(user: User): Promise<FitReportRecord[]> {
+    return (await this.ds.query(`${SELECT} WHERE ($1::uuid IS NULL OR r.shop_id = $1) ORDER BY r.created_at DESC LIMIT 200`, [
       user.role === 'technician' ? user.shopId : null,
-    ])) as FitReportRow[];
-    return rows.map((r) => ({
-      id: r.id,
-      kind: r.kind,
-      title: r.title,
-      verdict: r.verdict,
-      createdAt: r.created_at.toISOString(),
-      createdBy: r.created_by_name,
-      shopName: r.shop_name,
-    }));
+    ])) as FitReportRecord[];
   }
 
-  async get(user: User, id: string): Promise<FitReport> {
-    const rows = (await this.ds.query(`${SELECT} WHERE r.id = $1`, [id])) as FitReportRow[];
+  async get(user: User, id: string): Promise<FitReportRecord> {
+    const rows = (await this.ds.query(`${SELECT} WHERE r.id = $1`, [id])) as FitReportRecord[];
     const r = rows[0];
     // Another shop's report is "not found", so its existence does not leak.
     if (!r || !visibleTo(user, r)) throw AppError.notFound('Fit report');
-    return present(r, this.appUrl);
+    return r;
   }
 
-  async getShared(token: string): Promise<FitReport> {
-    const rows = (await this.ds.query(`${SELECT} WHERE r.share_token = $1`, [token])) as FitReportRow[];
+  async getShared(token: string): Promise<FitReportRecord> {
+    const rows = (await this.ds.query(`${SELECT} WHERE r.share_token = $1`, [token])) as FitReportRecord[];
     if (!rows[0]) throw AppError.notFound('Fit report');
-    return present(rows[0], this.appUrl);
+    return rows[0];
   }
 
   /** Checks the sender may see the report, then queues the e-mail with its audit row. */
@@ -133,10 +95,10 @@ export class FitReportService {
 
   /** The message, rendered by the mail job from PostgreSQL (the sender's right to it was checked when it was queued). */
   async mail(id: string, senderId: string, to: string): Promise<OutgoingMail> {
-    const rows = (await this.ds.query(`${SELECT} WHERE r.id = $1`, [id])) as FitReportRow[];
+    const rows = (await this.ds.query(`${SELECT} WHERE r.id = $1`, [id])) as FitReportRecord[];
     const senders = (await this.ds.query(`SELECT name FROM "user" WHERE id = $1`, [senderId])) as { name: string }[];
     if (!rows[0] || !senders[0]) throw new Error(`fit report ${id} or its sender ${senderId} is gone`);
-    const report = present(rows[0], this.appUrl);
+    const report = presentFitReport(rows[0], this.appUrl);
     const sender = senders[0].name;
     const lines = report.result.checks.map((c) => `  ${c.verdict.toUpperCase().padEnd(6)} ${checkLabel(c.id)}: ${c.reason}`).join('\n');
     const htmlRows = report.result.checks

@@ -1,5 +1,5 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import type { PriceListApplied, PriceListCounts } from '../../../shared/schemas/price-list';
+import type { PriceListApplied, PriceListCounts } from '../../../shared/schemas/price-lists';
 import { AppError } from '../../errors';
 import { audit } from '../audit.service';
 import { lockListOrRefuse, lockSupplier } from './locks';

@@ -1,6 +1,6 @@
 import type pg from 'pg';
 import type { ResolvedMapping } from '../../../shared/price-list/mapping';
-import type { PriceListCounts } from '../../../shared/schemas/price-list';
+import type { PriceListCounts } from '../../../shared/schemas/price-lists';
 
 /**
  * The comparison of a staged list with the catalog and the supplier's current prices, in a few

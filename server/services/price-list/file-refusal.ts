@@ -1,4 +1,4 @@
-import type { PriceListFileRefusalDetails } from '../../../shared/schemas/price-list';
+import type { PriceListFileRefusalDetails } from '../../../shared/schemas/price-lists';
 import { AppError } from '../../errors';
 import { PriceListFileError, type PriceListFileErrorCode } from './decode';
 

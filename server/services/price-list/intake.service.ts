@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import type { DataSource } from 'typeorm';
 import { validateMapping, type Mapping } from '../../../shared/price-list/mapping';
-import type { PriceList } from '../../../shared/schemas/price-list';
+import type { PriceListRecord } from '../../presenters/price-list.presenter';
 import { AppError } from '../../errors';
 import { audit } from '../audit.service';
 import { diffStagedList, fieldHeaders } from './diff';
@@ -48,7 +48,7 @@ async function refuseCommittedFile(ds: DataSource, supplierId: string, sha256: s
 }
 
 /** POST /api/price-lists: reads, checks, stages and compares a supplier's file. */
-export async function uploadPriceList(deps: IntakeDeps, input: UploadInput): Promise<PriceList> {
+export async function uploadPriceList(deps: IntakeDeps, input: UploadInput): Promise<PriceListRecord> {
   const ds = deps.dataSource;
   const remembered = await supplierMapping(ds, input.supplierId);
   const sha256 = await sha256OfFile(input.filePath);
@@ -136,7 +136,7 @@ async function compareAgain(deps: IntakeDeps, listId: string, list: StagedListFa
 export async function previewPriceList(
   deps: IntakeDeps,
   input: { id: string; mapping?: Mapping; maxFileBytes: number; flagThresholdPct: number },
-): Promise<PriceList> {
+): Promise<PriceListRecord> {
   const ds = deps.dataSource;
   const list = await loadStaged(ds, input.id);
   if (input.mapping && !sameMapping(input.mapping, list.mapping)) {
@@ -158,7 +158,7 @@ export async function previewPriceList(
 }
 
 /** POST /api/price-lists/:id/discard: the catalog is not touched; the staged rows and the kept file go. */
-export async function discardPriceList(ds: DataSource, listId: string, actorId: string | null): Promise<PriceList> {
+export async function discardPriceList(ds: DataSource, listId: string, actorId: string | null): Promise<PriceListRecord> {
   await ds.transaction(async (m) => {
     await lockListOrRefuse(m, listId);
     const rows = (await m.query(`SELECT status, file_name FROM price_list WHERE id = $1 FOR UPDATE`, [listId])) as {

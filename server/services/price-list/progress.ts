@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import type { PriceListProgress } from '../../../shared/schemas/price-list';
+import type { PriceListProgress } from '../../../shared/schemas/price-lists';
 
 /** Rows between two progress writes: often enough for a progress bar, rare enough to cost nothing. */
 const EVERY_ROWS = 2000;

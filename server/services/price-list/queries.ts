@@ -1,32 +1,27 @@
 import type { DataSource } from 'typeorm';
-import type {
-  PriceList,
-  PriceListChanges,
-  PriceListChangesQuery,
-  PriceListErrors,
-  PriceListErrorsQuery,
-  PriceListHistory,
-  PriceListHistoryQuery,
-} from '../../../shared/schemas/price-list';
+import type { PriceListChangesQuery, PriceListErrorsQuery, PriceListHistoryQuery } from '../../../shared/schemas/price-lists';
 import { AppError } from '../../errors';
-import {
-  PRICE_LIST_SELECT,
-  presentChange,
-  presentPriceList,
-  presentRowError,
-  type ChangeRecord,
-  type PriceListRecord,
-  type RowErrorRecord,
-} from './present';
+import type { ChangeRecord, PriceListRecord, RowErrorRecord } from '../../presenters/price-list.presenter';
 
-export async function getPriceList(ds: DataSource, id: string): Promise<PriceList> {
+/** A price list with its supplier's name and its people's names. */
+const PRICE_LIST_SELECT = `
+SELECT pl.id, pl.supplier_id, s.name AS supplier_name, pl.file_name, pl.sha256, pl.size_bytes, pl.encoding, pl.delimiter,
+       pl.columns, pl.mapping, pl.mapping_source, pl.status, pl.stale, pl.counts, pl.flagged, pl.flag_threshold_pct,
+       pl.progress, pl.applied, pl.created_by, cu.name AS created_by_name, pl.created_at,
+       pl.committed_by, mu.name AS committed_by_name, pl.committed_at, pl.discarded_at
+  FROM price_list pl
+  JOIN supplier s ON s.id = pl.supplier_id
+  LEFT JOIN "user" cu ON cu.id = pl.created_by
+  LEFT JOIN "user" mu ON mu.id = pl.committed_by`;
+
+export async function getPriceList(ds: DataSource, id: string): Promise<PriceListRecord> {
   const rows = (await ds.query(`${PRICE_LIST_SELECT} WHERE pl.id = $1`, [id])) as PriceListRecord[];
   if (!rows[0]) throw AppError.notFound('Price list');
-  return presentPriceList(rows[0]);
+  return rows[0];
 }
 
 /** The history: newest first, of one supplier or of all. */
-export async function listPriceLists(ds: DataSource, q: PriceListHistoryQuery): Promise<PriceListHistory> {
+export async function listPriceLists(ds: DataSource, q: PriceListHistoryQuery): Promise<{ rows: PriceListRecord[]; total: number }> {
   const where = q.supplierId ? `WHERE pl.supplier_id = $1` : '';
   const params = q.supplierId ? [q.supplierId] : [];
   // limit and offset are integers checked by the query schema.
@@ -35,7 +30,7 @@ export async function listPriceLists(ds: DataSource, q: PriceListHistoryQuery): 
     params,
   )) as PriceListRecord[];
   const total = (await ds.query(`SELECT count(*)::int AS n FROM price_list pl ${where}`, params)) as { n: number }[];
-  return { priceLists: rows.map(presentPriceList), total: total[0]?.n ?? 0 };
+  return { rows, total: total[0]?.n ?? 0 };
 }
 
 async function ensureList(ds: DataSource, id: string): Promise<void> {
@@ -48,7 +43,7 @@ const CHANGE_COLUMNS = `line, change, part_id, part_number, brand, description, 
   (coil IS NOT NULL OR plug IS NOT NULL) AS has_spec, supersedes, supersession`;
 
 /** Rows of the preview tables, in file order. */
-export async function listChanges(ds: DataSource, id: string, q: PriceListChangesQuery): Promise<PriceListChanges> {
+export async function listChanges(ds: DataSource, id: string, q: PriceListChangesQuery): Promise<{ rows: ChangeRecord[]; total: number }> {
   await ensureList(ds, id);
   const conditions = [`price_list_id = $1`, `NOT retracted`, `change IN ('new', 'changed', 'unchanged')`];
   const params: unknown[] = [id];
@@ -64,15 +59,19 @@ export async function listChanges(ds: DataSource, id: string, q: PriceListChange
     params,
   )) as ChangeRecord[];
   const total = (await ds.query(`SELECT count(*)::int AS n FROM price_list_row WHERE ${where}`, params)) as { n: number }[];
-  return { changes: rows.map(presentChange), total: total[0]?.n ?? 0 };
+  return { rows, total: total[0]?.n ?? 0 };
 }
 
-export async function listRowErrors(ds: DataSource, id: string, q: PriceListErrorsQuery): Promise<PriceListErrors> {
+export async function listRowErrors(
+  ds: DataSource,
+  id: string,
+  q: PriceListErrorsQuery,
+): Promise<{ rows: RowErrorRecord[]; total: number }> {
   await ensureList(ds, id);
   const rows = (await ds.query(
     `SELECT line, "column", field, message FROM price_list_row_error WHERE price_list_id = $1 ORDER BY line, id LIMIT $2 OFFSET $3`,
     [id, q.limit, q.offset],
   )) as RowErrorRecord[];
   const total = (await ds.query(`SELECT count(*)::int AS n FROM price_list_row_error WHERE price_list_id = $1`, [id])) as { n: number }[];
-  return { errors: rows.map(presentRowError), total: total[0]?.n ?? 0 };
+  return { rows, total: total[0]?.n ?? 0 };
 }

@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { formatCents } from '../../../shared/money';
-import type { PriceListApplied, PriceListCounts } from '../../../shared/schemas/price-list';
+import type { PriceListApplied, PriceListCounts } from '../../../shared/schemas/price-lists';
 import { escapeHtml, type OutgoingMail } from '../../mail/mailer';
 
 /** Flagged moves listed in the message; the rest are on the Price lists page. */

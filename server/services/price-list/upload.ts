@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { tmpdir } from 'node:os';
 import type { Request, Response } from 'express';
 import multer from 'multer';
-import { PRICE_LIST_MAX_FILE_NAME, PRICE_LIST_UPLOAD_FIELD } from '../../../shared/schemas/price-list';
+import { PRICE_LIST_MAX_FILE_NAME, PRICE_LIST_UPLOAD_FIELD } from '../../../shared/schemas/price-lists';
 import { AppError } from '../../errors';
 import { tooLarge } from './file-refusal';
 

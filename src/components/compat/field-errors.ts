@@ -1,8 +1,6 @@
-import { z } from 'zod';
+import type { z } from 'zod';
+import { fieldIssuesSchema } from '@shared/schemas/error';
 import { ApiError } from '@/lib/api-client';
-
-// The API's 400 names each bad field: `details: [{ field: 'substitute.spec.primaryOhmMin', message }]`.
-const detailsSchema = z.array(z.object({ field: z.string(), message: z.string() }));
 
 /**
  * The field messages of an API error under one prefix, keyed by the rest of the path:
@@ -11,7 +9,8 @@ const detailsSchema = z.array(z.object({ field: z.string(), message: z.string() 
  */
 export function fieldErrorsOf(error: unknown, prefix = ''): Record<string, string> {
   if (!(error instanceof ApiError)) return {};
-  const parsed = detailsSchema.safeParse(error.details);
+  // The API's 400 names each bad field: `details: [{ field: 'substitute.spec.primaryOhmMin', message }]`.
+  const parsed = fieldIssuesSchema.safeParse(error.details);
   if (!parsed.success) return {};
   const out: Record<string, string> = {};
   for (const { field, message } of parsed.data) {

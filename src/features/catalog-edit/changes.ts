@@ -1,6 +1,6 @@
 import type { PartKind } from '@shared/schemas/specs';
 import { formatMeasure, formatRange } from '@/components/compat/format';
-import type { PartDetail } from './api/response-shapes';
+import type { PartDetail } from '@shared/schemas/parts';
 import { specFieldsFor, specFigure, specLabel, type ShownSpec } from './spec-fields';
 
 /** One line of "what changed" after a save: the field, what it was, what it is now. */

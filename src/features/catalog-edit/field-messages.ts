@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { conflictDetailsSchema } from '@shared/schemas/error';
 import { fieldErrorsOf } from '@/components/compat/field-errors';
 import { ApiError } from '@/lib/api-client';
 
@@ -8,8 +8,6 @@ const CONFLICTS: Record<string, { field: string; message: string }> = {
   part_brand_number_uq: { field: 'partNumber', message: 'this brand already has a part with this number' },
   interchange_uq: { field: 'number', message: 'this number is already on file for this part' },
 };
-
-const conflictDetails = z.object({ constraint: z.string() });
 
 /**
  * An API error's messages keyed by field, under an optional prefix ('plug' → 'reachMm'). Besides
@@ -21,7 +19,7 @@ export function fieldMessages(error: unknown, prefix = ''): Record<string, strin
   const out = fieldErrorsOf(error, prefix);
   if (Object.keys(out).length) return out;
   if (error.status === 409) {
-    const parsed = conflictDetails.safeParse(error.details);
+    const parsed = conflictDetailsSchema.safeParse(error.details);
     const known = parsed.success ? CONFLICTS[parsed.data.constraint] : undefined;
     if (known) return prefix === '' ? { [known.field]: known.message } : {};
   }

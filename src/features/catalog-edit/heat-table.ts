@@ -1,4 +1,4 @@
-import { createBrandBodySchema, type CreateBrandBody } from '@shared/schemas/catalog';
+import { createBrandBodySchema, type CreateBrandBody } from '@shared/schemas/brands';
 import { HEAT_STEP_MAX, HEAT_STEP_MIN } from '@shared/schemas/specs';
 
 /**

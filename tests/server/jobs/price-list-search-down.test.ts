@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import type { CommitPriceListResponse } from '../../../shared/schemas/price-list';
+import type { CommitPriceListResponse } from '../../../shared/schemas/price-lists';
 import { onlyJob, waitForJobState } from '../../helpers/jobs';
 import { caughtMail } from '../../helpers/mail';
 import { OwnSearchApp } from '../../helpers/own-search';

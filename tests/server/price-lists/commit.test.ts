@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { COIL_SPEC_FIELDS, FIELD_LABELS, PLUG_SPEC_FIELDS } from '../../../shared/price-list/fields';
-import type { CommitPriceListResponse, PriceList, PriceListHistory, Supplier } from '../../../shared/schemas/price-list';
+import type { CommitPriceListResponse, PriceList, PriceListHistory } from '../../../shared/schemas/price-lists';
+import type { Supplier } from '../../../shared/schemas/suppliers';
 import type { SearchResponse } from '../../../shared/schemas/search';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { caughtMail } from '../../helpers/mail';

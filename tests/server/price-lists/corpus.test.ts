@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PriceList, PriceListErrors, Supplier } from '../../../shared/schemas/price-list';
+import type { PriceList, PriceListErrors } from '../../../shared/schemas/price-lists';
+import type { Supplier } from '../../../shared/schemas/suppliers';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { newSupplier, post, upload, type Signed } from '../../helpers/price-list-api';
 import { isFullyCommitted, listState } from '../../helpers/price-list-checks';

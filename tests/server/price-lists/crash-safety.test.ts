@@ -1,7 +1,8 @@
 import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { PriceList, Supplier } from '../../../shared/schemas/price-list';
+import type { PriceList } from '../../../shared/schemas/price-lists';
+import type { Supplier } from '../../../shared/schemas/suppliers';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { newSupplier, post, stage, type Signed } from '../../helpers/price-list-api';
 import { isFullyCommitted, isUntouched, listState } from '../../helpers/price-list-checks';

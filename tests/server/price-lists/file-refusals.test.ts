@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PriceListHistory, Supplier } from '../../../shared/schemas/price-list';
+import type { PriceListHistory } from '../../../shared/schemas/price-lists';
+import type { Supplier } from '../../../shared/schemas/suppliers';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { newSupplier, upload, type Signed } from '../../helpers/price-list-api';
 import { csv, gtin, STANDARD_HEADER } from '../../helpers/price-list-files';

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Mapping } from '../../../shared/price-list/mapping';
-import type { PriceList, PriceListChange, PriceListChanges, PriceListErrors } from '../../../shared/schemas/price-list';
+import type { PriceList, PriceListChange, PriceListChanges, PriceListErrors } from '../../../shared/schemas/price-lists';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { post, SAMPLE, sampleFile, stage, supplierWithSeedPrices, type Signed } from '../../helpers/price-list-api';
 import { runTag } from '../../helpers/price-list-files';

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PriceList } from '../../../shared/schemas/price-list';
+import type { PriceList } from '../../../shared/schemas/price-lists';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { newSupplier, upload, type Signed } from '../../helpers/price-list-api';
 import { bulkCsv, bulkRows, runTag } from '../../helpers/price-list-files';

@@ -1,6 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PriceList, PriceListChanges, PriceListErrors, Supplier } from '../../../shared/schemas/price-list';
+import type { PriceList, PriceListChanges, PriceListErrors } from '../../../shared/schemas/price-lists';
+import type { Supplier } from '../../../shared/schemas/suppliers';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { newSupplier, stage, type Signed } from '../../helpers/price-list-api';
 import { csv, runTag, STANDARD_HEADER, type Cell } from '../../helpers/price-list-files';

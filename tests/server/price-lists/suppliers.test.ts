@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Supplier } from '../../../shared/schemas/price-list';
+import type { Supplier } from '../../../shared/schemas/suppliers';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import type { Signed } from '../../helpers/price-list-api';
 import { createTestApp, signIn, type TestApp } from '../../helpers/test-app';

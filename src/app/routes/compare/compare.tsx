@@ -1,4 +1,4 @@
-import type { FitReportBody } from '@shared/schemas/compat';
+import type { FitReportBody } from '@shared/schemas/fit-reports';
 import { fieldErrorsOf } from '@/components/compat/field-errors';
 import { Button } from '@/components/ui/button';
 import { PageHeader, Panel } from '@/components/ui/panel';

@@ -1,18 +1,13 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { partSummarySchema } from '@shared/schemas/catalog';
-import { coilSpecSchema, resolvedPlugSpecSchema } from '@shared/schemas/specs';
+import { partDetailSchema, type PartDetail } from '@shared/schemas/parts';
 import { api } from '@/lib/api-client';
 import { benchKeys } from './keys';
 
-const partResponseSchema = z.object({
-  part: partSummarySchema,
-  spec: z.union([coilSpecSchema, resolvedPlugSpecSchema]).nullable(),
-});
-export type CoilPart = z.infer<typeof partResponseSchema>;
+/** What the bench test reads of a coil: who it is and its spec, for its resistance windows. */
+export type CoilPart = Pick<PartDetail, 'part' | 'spec'>;
 
-export const getCoil = (id: string): Promise<CoilPart> =>
-  api('GET', `/api/parts/${encodeURIComponent(id)}`, { schema: partResponseSchema });
+export const getCoil = (id: string): Promise<PartDetail> =>
+  api('GET', `/api/parts/${encodeURIComponent(id)}`, { schema: partDetailSchema });
 
 export const coilQueryOptions = (id: string | null) =>
   queryOptions({ queryKey: benchKeys.coil(id ?? ''), queryFn: id === null ? skipToken : () => getCoil(id), staleTime: 60_000 });

@@ -1,6 +1,7 @@
 import { StatusBadge, type Verdict } from '@/components/compat/verdict-badge';
 import { formatMeasure, formatRange } from '@/components/compat/format';
-import type { BenchResult, BenchVerdict } from '../api/run-bench-test';
+import type { BenchVerdict } from '@shared/compat/bench-test';
+import type { BenchResult } from '@shared/schemas/bench';
 
 /** A bench verdict's word and the verdict look it takes: only "in spec" is good to fit. */
 export const BENCH_LOOK: Record<BenchVerdict, { tone: Verdict; label: string }> = {

@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { DEFAULT_COMPAT_SETTINGS } from '@shared/compat/settings';
 import { fractionToPct } from '@shared/units';
-import { benchBodySchema, type BenchBody } from '@shared/schemas/compat';
+import { benchBodySchema, type BenchBody } from '@shared/schemas/bench';
 import { coilSpecSchema, type CoilSpec } from '@shared/schemas/specs';
 import { Cautions } from '@/components/compat/cautions';
 import { fieldErrorsOf, issuesByPath } from '@/components/compat/field-errors';

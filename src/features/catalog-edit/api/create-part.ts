@@ -1,9 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CreatePartBody } from '@shared/schemas/catalog';
+import { partDetailSchema, type CreatePartBody } from '@shared/schemas/parts';
 import { api } from '@/lib/api-client';
 import { catalogEditKeys } from './keys';
 import { refreshCatalogViews } from './refresh-catalog-views';
-import { partDetailSchema } from './response-shapes';
 
 export const createPart = (body: CreatePartBody) => api('POST', '/api/parts', { body, schema: partDetailSchema });
 

@@ -1,10 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
+import { brandsResponseSchema } from '@shared/schemas/brands';
 import { api } from '@/lib/api-client';
 import { catalogEditKeys } from './keys';
-import { brandSchema } from './response-shapes';
-
-const brandsResponseSchema = z.object({ brands: z.array(brandSchema) });
 
 export const getBrands = async () => (await api('GET', '/api/brands', { schema: brandsResponseSchema })).brands;
 

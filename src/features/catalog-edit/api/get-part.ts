@@ -1,7 +1,7 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
+import { partDetailSchema, type PartDetail } from '@shared/schemas/parts';
 import { api } from '@/lib/api-client';
 import { catalogEditKeys } from './keys';
-import { partDetailSchema, type PartDetail } from './response-shapes';
 
 export const getPart = (id: string): Promise<PartDetail> =>
   api('GET', `/api/parts/${encodeURIComponent(id)}`, { schema: partDetailSchema });

@@ -1,4 +1,4 @@
-import type { Brand } from '../api/response-shapes';
+import type { Brand } from '@shared/schemas/brands';
 import { HeatScale, ScaleEnds } from './heat-scale';
 
 /** The brands on file, our lines first, each with its heat table on the store's scale. */

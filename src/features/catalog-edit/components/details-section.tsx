@@ -1,10 +1,10 @@
 import { useState, type FormEvent } from 'react';
-import { partStatusSchema, updatePartBodySchema, type UpdatePartBody } from '@shared/schemas/catalog';
+import { partStatusSchema, updatePartBodySchema, type UpdatePartBody } from '@shared/schemas/parts';
 import { issuesByPath } from '@/components/compat/field-errors';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';
-import type { PartDetail } from '../api/response-shapes';
+import type { PartDetail } from '@shared/schemas/parts';
 import { useUpdatePart } from '../api/update-part';
 import { partChanges, type Change } from '../changes';
 import { fieldMessages, unplacedError } from '../field-messages';

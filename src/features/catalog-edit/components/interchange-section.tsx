@@ -1,12 +1,13 @@
 import { useState, type FormEvent } from 'react';
-import { createInterchangeBodySchema } from '@shared/schemas/catalog';
+import { createInterchangeBodySchema } from '@shared/schemas/interchange';
 import { issuesByPath } from '@/components/compat/field-errors';
 import { VerdictBadge } from '@/components/compat/verdict-badge';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';
 import { useCreateInterchange } from '../api/create-interchange';
-import type { Brand, PartDetail } from '../api/response-shapes';
+import type { Brand } from '@shared/schemas/brands';
+import type { PartDetail } from '@shared/schemas/parts';
 import type { Change } from '../changes';
 import { fieldMessages, unplacedError } from '../field-messages';
 import { ChangeNote } from './change-note';

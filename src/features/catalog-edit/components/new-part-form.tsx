@@ -1,12 +1,13 @@
 import { useId, useState, type FormEvent } from 'react';
-import { createPartBodySchema } from '@shared/schemas/catalog';
+import { createPartBodySchema } from '@shared/schemas/parts';
 import { PART_KINDS, type PartKind } from '@shared/schemas/specs';
 import { issuesByPath } from '@/components/compat/field-errors';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';
 import { useCreatePart } from '../api/create-part';
-import type { Brand, PartDetail } from '../api/response-shapes';
+import type { Brand } from '@shared/schemas/brands';
+import type { PartDetail } from '@shared/schemas/parts';
 import { createdChanges } from '../changes';
 import { fieldMessages, unplacedError } from '../field-messages';
 import { emptySpecValues, parseSpec, specFieldsFor, type SpecValues } from '../spec-fields';

@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import type { PartKind } from '@shared/schemas/specs';
 import { UnitField } from '@/components/compat/unit-field';
-import type { Brand } from '../api/response-shapes';
+import type { Brand } from '@shared/schemas/brands';
 import { ChoiceField } from './choice-field';
 import { specFieldsFor, specMessage, type SpecValues } from '../spec-fields';
 

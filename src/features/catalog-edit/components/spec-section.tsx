@@ -1,7 +1,8 @@
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { ErrorNote } from '@/components/ui/panel';
-import type { Brand, PartDetail } from '../api/response-shapes';
+import type { Brand } from '@shared/schemas/brands';
+import type { PartDetail } from '@shared/schemas/parts';
 import { useUpdatePart } from '../api/update-part';
 import { partChanges, type Change } from '../changes';
 import { fieldMessages, unplacedError } from '../field-messages';

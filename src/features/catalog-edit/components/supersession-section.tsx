@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { SearchHit } from '@shared/schemas/search';
 import { Button } from '@/components/ui/button';
 import { ErrorNote } from '@/components/ui/panel';
-import type { PartDetail, PartRef } from '../api/response-shapes';
+import type { PartDetail, PartRef } from '@shared/schemas/parts';
 import { useUpdatePart } from '../api/update-part';
 import { partChanges, type Change } from '../changes';
 import { fieldMessages, unplacedError } from '../field-messages';

@@ -1,23 +1,8 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { partSummarySchema, priceSchema } from '@shared/schemas/catalog';
-import { checkSchema, verdictSchema, type CheckRow } from '@shared/schemas/compat';
+import { alternatesResponseSchema, type Alternate } from '@shared/schemas/alternates';
 import type { PartKind } from '@shared/schemas/specs';
 import { api, ApiError } from '@/lib/api-client';
 import { catalogKeys } from './keys';
-
-export type AlternateCheck = CheckRow;
-
-const alternateSchema = z.object({
-  part: partSummarySchema,
-  verdict: verdictSchema,
-  checks: z.array(checkSchema),
-  inStock: z.boolean(),
-  price: priceSchema.nullable(),
-});
-export type Alternate = z.infer<typeof alternateSchema>;
-
-const alternatesResponseSchema = z.object({ alternates: z.array(alternateSchema) });
 
 /** `available: false` while the server has no alternates route (or no ranking for this engine). */
 export type AlternatesResult = { available: true; alternates: Alternate[] } | { available: false };

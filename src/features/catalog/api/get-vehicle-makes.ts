@@ -1,12 +1,10 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
+import { vehicleMakesResponseSchema } from '@shared/schemas/vehicles';
 import { api } from '@/lib/api-client';
 import { catalogKeys } from './keys';
 
-const makesResponseSchema = z.object({ makes: z.array(z.string()) });
-
 export const getVehicleMakes = async (year: number): Promise<string[]> =>
-  (await api('GET', `/api/vehicles/makes?${new URLSearchParams({ year: String(year) })}`, { schema: makesResponseSchema })).makes;
+  (await api('GET', `/api/vehicles/makes?${new URLSearchParams({ year: String(year) })}`, { schema: vehicleMakesResponseSchema })).makes;
 
 export const vehicleMakesQueryOptions = (year: number | null) =>
   queryOptions({

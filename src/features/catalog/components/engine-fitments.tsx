@@ -1,5 +1,6 @@
 import { ErrorNote } from '@/components/ui/panel';
-import { useEngine, type Fitment } from '../api/get-engine';
+import { useEngine } from '../api/get-engine';
+import type { Fitment } from '@shared/schemas/vehicles';
 import { AlternatesList } from './alternates-list';
 import { EngineSummary } from './engine-summary';
 import { PriceNote } from './price-note';

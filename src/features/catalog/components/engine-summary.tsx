@@ -1,8 +1,8 @@
-import type { EngineDetail } from '../api/get-engine';
+import type { Engine } from '@shared/schemas/vehicles';
 import { formatMeasure, formatNumber, UNITS } from '../format';
 
 /** The engine figures a substitute is judged against, on one line. */
-export function EngineSummary({ engine }: { engine: EngineDetail }) {
+export function EngineSummary({ engine }: { engine: Engine }) {
   const facts = [
     engine.description,
     `${engine.cylinders} cyl`,

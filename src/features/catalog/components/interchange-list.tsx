@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { normalizePartNumber } from '@shared/part-number';
 import { checkLabel } from '@/components/compat/check-labels';
 import { VerdictBadge } from '@/components/compat/verdict-badge';
-import type { InterchangeRow } from '../api/get-part';
+import type { InterchangeRow } from '@shared/schemas/parts';
 import { compareHref } from '../compare-link';
 import { formatPercent } from '../format';
 

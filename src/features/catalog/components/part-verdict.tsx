@@ -1,8 +1,9 @@
 import { Link } from 'react-router-dom';
-import type { PartSummary } from '@shared/schemas/catalog';
+import type { PartSummary } from '@shared/schemas/parts';
 import { ErrorNote } from '@/components/ui/panel';
 import { useAlternates } from '../api/get-alternates';
-import { useEngine, type Fitment } from '../api/get-engine';
+import { useEngine } from '../api/get-engine';
+import type { Fitment } from '@shared/schemas/vehicles';
 import { compareHref } from '../compare-link';
 import { AlternatesList } from './alternates-list';
 import { CheckRows } from './check-rows';

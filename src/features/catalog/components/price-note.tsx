@@ -1,4 +1,4 @@
-import type { Price } from '@shared/schemas/catalog';
+import type { Price } from '@shared/schemas/parts';
 import { formatMoney } from '../format';
 
 /** The sell price, with the core charge when the part carries one. */

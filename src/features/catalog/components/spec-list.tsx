@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import type { CoilSpec, ResolvedPlugSpec } from '@shared/schemas/specs';
-import { isCoilSpec, type PartSpec } from '../api/response-shapes';
+import { isCoilSpec, type PartSpec } from '@shared/schemas/specs';
 import { formatMeasure, formatNumber, formatRange, UNITS, yesNo } from '../format';
 
 type Row = [term: string, value: ReactNode];

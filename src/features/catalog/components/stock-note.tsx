@@ -1,4 +1,4 @@
-import type { StockView } from '../api/response-shapes';
+import type { StockView } from '@shared/schemas/parts';
 import { yesNo } from '../format';
 
 /** On hand and bin for the store's staff; in stock yes/no for a shop's technician. */

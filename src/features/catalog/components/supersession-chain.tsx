@@ -1,5 +1,5 @@
-import type { Supersession } from '../api/get-part';
-import type { PartRef } from '../api/response-shapes';
+import type { Supersession } from '@shared/schemas/parts';
+import type { PartRef } from '@shared/schemas/parts';
 
 function PartButton({ part, onOpenPart, current }: { part: PartRef; onOpenPart: (id: string) => void; current: boolean }) {
   if (current) return <span className="font-mono font-semibold">{part.partNumber} (this part)</span>;

@@ -1,4 +1,4 @@
-import type { Price } from '@shared/schemas/catalog';
+import type { Price } from '@shared/schemas/parts';
 import { formatMoney, formatPercent } from '../format';
 
 /** Each supplier's prices; cost and margin columns appear only when the server sent them (buyers, admins). */

@@ -1,6 +1,7 @@
 import { SelectField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';
-import { useVehicleEngines, type VehicleEngine } from '../api/get-vehicle-engines';
+import { useVehicleEngines } from '../api/get-vehicle-engines';
+import type { VehicleEngine } from '@shared/schemas/vehicles';
 import { useVehicleMakes } from '../api/get-vehicle-makes';
 import { useVehicleModels } from '../api/get-vehicle-models';
 import { useVehicleYears } from '../api/get-vehicle-years';

@@ -1,16 +1,14 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
+import { vehicleEnginesResponseSchema, type VehicleEngine } from '@shared/schemas/vehicles';
 import { api } from '@/lib/api-client';
 import { compareKeys } from './keys';
 
-const vehicleEngineSchema = z.object({ id: z.string(), code: z.string(), label: z.string() });
-export type VehicleEngine = z.infer<typeof vehicleEngineSchema>;
-
-const enginesResponseSchema = z.object({ engines: z.array(vehicleEngineSchema) });
-
 export const getVehicleEngines = async (year: number, make: string, model: string): Promise<VehicleEngine[]> =>
-  (await api('GET', `/api/vehicles/engines?${new URLSearchParams({ year: String(year), make, model })}`, { schema: enginesResponseSchema }))
-    .engines;
+  (
+    await api('GET', `/api/vehicles/engines?${new URLSearchParams({ year: String(year), make, model })}`, {
+      schema: vehicleEnginesResponseSchema,
+    })
+  ).engines;
 
 export const vehicleEnginesQueryOptions = (year: number | null, make: string | null, model: string | null) =>
   queryOptions({

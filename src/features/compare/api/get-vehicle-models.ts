@@ -1,12 +1,11 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
+import { vehicleModelsResponseSchema } from '@shared/schemas/vehicles';
 import { api } from '@/lib/api-client';
 import { compareKeys } from './keys';
 
-const modelsResponseSchema = z.object({ models: z.array(z.string()) });
-
 export const getVehicleModels = async (year: number, make: string): Promise<string[]> =>
-  (await api('GET', `/api/vehicles/models?${new URLSearchParams({ year: String(year), make })}`, { schema: modelsResponseSchema })).models;
+  (await api('GET', `/api/vehicles/models?${new URLSearchParams({ year: String(year), make })}`, { schema: vehicleModelsResponseSchema }))
+    .models;
 
 export const vehicleModelsQueryOptions = (year: number | null, make: string | null) =>
   queryOptions({

@@ -1,14 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { fitReportSchema, type FitReport, type FitReportBody } from '@shared/schemas/compat';
+import { fitReportResponseSchema, type FitReport, type FitReportBody } from '@shared/schemas/fit-reports';
 import { api } from '@/lib/api-client';
 import { fitReportKeys } from './keys';
 
-const createResponseSchema = z.object({ fitReport: fitReportSchema });
-
 /** Saves a comparison's inputs; the server recomputes the verdict from them. */
 export const createFitReport = async (body: FitReportBody): Promise<FitReport> =>
-  (await api('POST', '/api/fit-reports', { body, schema: createResponseSchema })).fitReport;
+  (await api('POST', '/api/fit-reports', { body, schema: fitReportResponseSchema })).fitReport;
 
 export const useCreateFitReport = () => {
   const qc = useQueryClient();

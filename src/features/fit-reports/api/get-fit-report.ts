@@ -1,13 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { fitReportSchema, type FitReport } from '@shared/schemas/compat';
+import { fitReportResponseSchema, type FitReport } from '@shared/schemas/fit-reports';
 import { api } from '@/lib/api-client';
 import { fitReportKeys } from './keys';
 
-const detailResponseSchema = z.object({ fitReport: fitReportSchema });
-
 export const getFitReport = async (id: string): Promise<FitReport> =>
-  (await api('GET', `/api/fit-reports/${encodeURIComponent(id)}`, { schema: detailResponseSchema })).fitReport;
+  (await api('GET', `/api/fit-reports/${encodeURIComponent(id)}`, { schema: fitReportResponseSchema })).fitReport;
 
 export const fitReportQueryOptions = (id: string) => queryOptions({ queryKey: fitReportKeys.detail(id), queryFn: () => getFitReport(id) });
 

@@ -1,24 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { fitReportSchema } from '@shared/schemas/compat';
+import { fitReportsResponseSchema, type FitReportSummary } from '@shared/schemas/fit-reports';
 import { api } from '@/lib/api-client';
 import { fitReportKeys } from './keys';
 
-const fitReportSummarySchema = fitReportSchema.pick({
-  id: true,
-  kind: true,
-  title: true,
-  verdict: true,
-  createdAt: true,
-  createdBy: true,
-  shopName: true,
-});
-export type FitReportSummary = z.infer<typeof fitReportSummarySchema>;
-
-const listResponseSchema = z.object({ fitReports: z.array(fitReportSummarySchema) });
-
 export const getFitReports = async (): Promise<FitReportSummary[]> =>
-  (await api('GET', '/api/fit-reports', { schema: listResponseSchema })).fitReports;
+  (await api('GET', '/api/fit-reports', { schema: fitReportsResponseSchema })).fitReports;
 
 export const fitReportsQueryOptions = () => queryOptions({ queryKey: fitReportKeys.list, queryFn: getFitReports });
 

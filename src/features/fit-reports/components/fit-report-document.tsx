@@ -1,4 +1,4 @@
-import type { FitReport } from '@shared/schemas/compat';
+import type { FitReport } from '@shared/schemas/fit-reports';
 import { CompatResultView } from '@/components/compat/compat-result-view';
 
 const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'long', timeStyle: 'short' });

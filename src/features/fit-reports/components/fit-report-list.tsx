@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { VerdictBadge } from '@/components/compat/verdict-badge';
-import type { FitReportSummary } from '../api/get-fit-reports';
+import type { FitReportSummary } from '@shared/schemas/fit-reports';
 
 const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
 const KIND_LABEL = { coil: 'coil', plug: 'plug' } as const;

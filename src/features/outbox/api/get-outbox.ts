@@ -1,9 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { outboxMessageSchema } from '@shared/schemas/auth';
+import { outboxResponseSchema } from '@shared/schemas/outbox';
 import { api } from '@/lib/api-client';
-
-const outboxResponseSchema = z.object({ messages: z.array(outboxMessageSchema) });
 
 export const outboxKeys = { all: ['outbox'] as const };
 

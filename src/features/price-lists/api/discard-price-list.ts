@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { priceListSchema } from '@shared/schemas/price-list';
+import { priceListSchema } from '@shared/schemas/price-lists';
 import { api } from '@/lib/api-client';
 import { priceListKeys } from './keys';
 

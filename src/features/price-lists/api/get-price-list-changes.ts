@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { priceListChangesSchema, type PriceListChangeType } from '@shared/schemas/price-list';
+import { priceListChangesSchema, type PriceListChangeType } from '@shared/schemas/price-lists';
 import { api } from '@/lib/api-client';
 import { priceListKeys } from './keys';
 

@@ -1,5 +1,5 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
-import { priceListHistorySchema } from '@shared/schemas/price-list';
+import { priceListHistorySchema } from '@shared/schemas/price-lists';
 import { api } from '@/lib/api-client';
 import { priceListKeys } from './keys';
 

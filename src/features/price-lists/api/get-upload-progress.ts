@@ -1,5 +1,5 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
-import { priceListSchema, type PriceList } from '@shared/schemas/price-list';
+import { priceListSchema, type PriceList } from '@shared/schemas/price-lists';
 import { api, ApiError } from '@/lib/api-client';
 import { priceListKeys } from './keys';
 

@@ -1,4 +1,4 @@
-import type { PriceListChangeType } from '@shared/schemas/price-list';
+import type { PriceListChangeType } from '@shared/schemas/price-lists';
 
 export const priceListKeys = {
   all: ['price-lists'] as const,

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Mapping } from '@shared/price-list/mapping';
-import { priceListSchema } from '@shared/schemas/price-list';
+import { priceListSchema } from '@shared/schemas/price-lists';
 import { api } from '@/lib/api-client';
 import { priceListKeys } from './keys';
 

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { z } from 'zod';
 import type { Mapping } from '@shared/price-list/mapping';
+import { csrfResponseSchema } from '@shared/schemas/auth';
 import { errorBodySchema } from '@shared/schemas/error';
-import { priceListSchema, type PriceList } from '@shared/schemas/price-list';
+import { priceListSchema, type PriceList } from '@shared/schemas/price-lists';
 import { ApiError } from '@/lib/api-client';
 import { priceListKeys } from './keys';
 
@@ -34,8 +34,6 @@ export function newUploadId(): string {
   const hex = Array.from(b, (x) => x.toString(16).padStart(2, '0')).join('');
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
 }
-
-const csrfResponseSchema = z.object({ token: z.string() });
 
 async function getCsrfToken(): Promise<string> {
   const res = await fetch('/api/auth/csrf', { credentials: 'same-origin' });

@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from 'react';
-import type { PriceListChange, PriceListChangeType, SupersessionState } from '@shared/schemas/price-list';
+import type { PriceListChange, PriceListChangeType, SupersessionState } from '@shared/schemas/price-lists';
 import { ErrorNote } from '@/components/ui/panel';
 import { usePriceListChanges } from '../api/get-price-list-changes';
 import { formatMoney, formatPercentChange, percentChange } from '../format';

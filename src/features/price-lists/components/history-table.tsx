@@ -1,7 +1,7 @@
 import { FIELD_LABELS } from '@shared/price-list/fields';
 import type { Mapping } from '@shared/price-list/mapping';
 import { Button } from '@/components/ui/button';
-import type { PriceList } from '@shared/schemas/price-list';
+import type { PriceList } from '@shared/schemas/price-lists';
 import { formatCount, formatWhen, shortHash } from '../format';
 
 const STATUS_TEXT: Record<PriceList['status'], string> = {

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { Mapping } from '@shared/price-list/mapping';
-import { priceListFileRefusalDetailsSchema, type PriceList, type PriceListCounts } from '@shared/schemas/price-list';
+import { priceListFileRefusalDetailsSchema, type PriceList, type PriceListCounts } from '@shared/schemas/price-lists';
 import { Button } from '@/components/ui/button';
 import { ErrorNote, Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';

@@ -1,4 +1,4 @@
-import type { PriceListCounts } from '@shared/schemas/price-list';
+import type { PriceListCounts } from '@shared/schemas/price-lists';
 import { formatCount } from '../format';
 import { FlagMark } from './flag-mark';
 

@@ -1,5 +1,5 @@
 import { useId, useRef, useState, type KeyboardEvent } from 'react';
-import type { PriceListChangeType, PriceListCounts } from '@shared/schemas/price-list';
+import type { PriceListChangeType, PriceListCounts } from '@shared/schemas/price-lists';
 import { formatCount } from '../format';
 import { ChangeTable } from './change-table';
 import { RejectedRows } from './rejected-rows';

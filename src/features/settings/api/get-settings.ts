@@ -1,10 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { settingsSchema, type Settings } from '@shared/schemas/settings';
+import { settingsResponseSchema, type Settings } from '@shared/schemas/settings';
 import { api } from '@/lib/api-client';
 import { settingsKeys } from './keys';
-
-const settingsResponseSchema = z.object({ settings: settingsSchema });
 
 export const getSettings = async (): Promise<Settings> => (await api('GET', '/api/settings', { schema: settingsResponseSchema })).settings;
 

@@ -1,10 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { supplierSchema } from '@shared/schemas/price-list';
+import { suppliersResponseSchema } from '@shared/schemas/suppliers';
 import { api } from '@/lib/api-client';
 import { supplierKeys } from './keys';
-
-const suppliersResponseSchema = z.object({ suppliers: z.array(supplierSchema) });
 
 export const getSuppliers = async () => (await api('GET', '/api/suppliers', { schema: suppliersResponseSchema })).suppliers;
 

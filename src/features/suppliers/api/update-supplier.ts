@@ -1,10 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { supplierSchema, type UpdateSupplierBody } from '@shared/schemas/price-list';
+import { supplierResponseSchema, type UpdateSupplierBody } from '@shared/schemas/suppliers';
 import { api } from '@/lib/api-client';
 import { supplierKeys } from './keys';
-
-const supplierResponseSchema = z.object({ supplier: supplierSchema });
 
 export const updateSupplier = async ({ id, ...body }: UpdateSupplierBody & { id: string }) =>
   (await api('PATCH', `/api/suppliers/${encodeURIComponent(id)}`, { body, schema: supplierResponseSchema })).supplier;

@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { ErrorNote } from '@/components/ui/panel';
 import { useUpdateSupplier } from '../api/update-supplier';
-import type { Supplier } from '@shared/schemas/price-list';
+import type { Supplier } from '@shared/schemas/suppliers';
 
 const CELL_INPUT = 'w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 text-[15px] focus:border-accent';
 

@@ -1,10 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { shopSchema } from '@shared/schemas/auth';
+import { shopsResponseSchema } from '@shared/schemas/users';
 import { api } from '@/lib/api-client';
 import { teamKeys } from './keys';
-
-const shopsResponseSchema = z.object({ shops: z.array(shopSchema) });
 
 export const getShops = async () => (await api('GET', '/api/shops', { schema: shopsResponseSchema })).shops;
 

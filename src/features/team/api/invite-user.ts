@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { InviteBody } from '@shared/schemas/auth';
+import type { InviteBody } from '@shared/schemas/users';
 import { api } from '@/lib/api-client';
 import { teamKeys } from './keys';
 

@@ -1,5 +1,5 @@
 import { ROLES, type Role } from '@shared/roles';
-import type { TeamMember } from '@shared/schemas/auth';
+import type { TeamMember } from '@shared/schemas/users';
 import { Button } from '@/components/ui/button';
 import { ErrorNote } from '@/components/ui/panel';
 import { useUpdateUser } from '../api/update-user';

@@ -1,61 +1,14 @@
 import { z } from 'zod';
 import { mappingSchema } from '../price-list/mapping';
-import { emailSchema } from './auth';
+import { limitQuerySchema, offsetQuerySchema, timestampSchema, uuidSchema } from './common';
+import { fileText } from './text';
 
-/**
- * Requests and responses of the supplier and price-list API (issue 5). The client derives its
- * types from here; the server validates every body, query and param with these.
- */
-
-// ---------- suppliers ----------
-
-export const SUPPLIER_KEY_PATTERN = /^[a-z0-9][a-z0-9-]{0,39}$/;
-
-export const supplierKeySchema = z.string().trim().regex(SUPPLIER_KEY_PATTERN, 'lower-case letters, digits and dashes, at most 40');
-const supplierNameSchema = z.string().trim().min(1).max(120);
-const phoneSchema = z.string().trim().max(40);
-
-export const createSupplierBodySchema = z.object({
-  /** Derived from the name when left out. */
-  key: supplierKeySchema.optional(),
-  name: supplierNameSchema,
-  contactEmail: emailSchema.nullable().optional(),
-  phone: phoneSchema.nullable().optional(),
-});
-export type CreateSupplierBody = z.infer<typeof createSupplierBodySchema>;
-
-export const updateSupplierBodySchema = z
-  .object({
-    key: supplierKeySchema.optional(),
-    name: supplierNameSchema.optional(),
-    contactEmail: emailSchema.nullable().optional(),
-    phone: phoneSchema.nullable().optional(),
-    /** The remembered column mapping; null forgets it. */
-    mapping: mappingSchema.nullable().optional(),
-  })
-  .refine((b) => Object.keys(b).length > 0, { message: 'nothing to change' });
-export type UpdateSupplierBody = z.infer<typeof updateSupplierBodySchema>;
-
-export const supplierSchema = z.object({
-  id: z.string().uuid(),
-  key: z.string(),
-  name: z.string(),
-  contactEmail: z.string().nullable(),
-  phone: z.string().nullable(),
-  mapping: mappingSchema.nullable(),
-  /** When the last price list of this supplier was committed. */
-  lastPriceListAt: z.string().nullable(),
-  lastPriceListId: z.string().uuid().nullable(),
-  createdAt: z.string(),
-});
-export type Supplier = z.infer<typeof supplierSchema>;
+/** Supplier price lists: upload, preview, commit or discard, history (buyers and admins). */
 
 // ---------- price lists: requests ----------
 
 /** The JSON text of a mapping, as sent in a multipart field. */
-const mappingFieldSchema = z
-  .string()
-  .max(256 * 1024)
+const mappingFieldSchema = fileText(256 * 1024)
   .transform((text, ctx) => {
     try {
       return JSON.parse(text) as unknown;
@@ -68,18 +21,18 @@ const mappingFieldSchema = z
 
 /** The text fields of the multipart upload (the file itself is the `file` part). */
 export const uploadPriceListFieldsSchema = z.object({
-  supplierId: z.string().uuid(),
+  supplierId: uuidSchema,
   mapping: mappingFieldSchema.optional(),
   /** Optional id chosen by the client, so it can poll GET /api/price-lists/:id while the upload is processed. */
-  uploadId: z.string().uuid().optional(),
+  uploadId: uuidSchema.optional(),
 });
 export type UploadPriceListFields = z.infer<typeof uploadPriceListFieldsSchema>;
 
 export const previewPriceListBodySchema = z.object({ mapping: mappingSchema.optional() });
 export type PreviewPriceListBody = z.infer<typeof previewPriceListBodySchema>;
 
-const offsetSchema = z.coerce.number().int().min(0).max(10_000_000).default(0);
-const limitSchema = z.coerce.number().int().min(1).max(1000).default(100);
+const offsetSchema = offsetQuerySchema(10_000_000);
+const limitSchema = limitQuerySchema(1000, 100);
 
 export const PRICE_LIST_CHANGE_TYPES = ['new', 'changed', 'unchanged', 'supersession'] as const;
 export type PriceListChangeType = (typeof PRICE_LIST_CHANGE_TYPES)[number];
@@ -97,7 +50,7 @@ export const priceListErrorsQuerySchema = z.object({ offset: offsetSchema, limit
 export type PriceListErrorsQuery = z.infer<typeof priceListErrorsQuerySchema>;
 
 export const priceListHistoryQuerySchema = z.object({
-  supplierId: z.string().uuid().optional(),
+  supplierId: uuidSchema.optional(),
   offset: offsetSchema,
   limit: limitSchema,
 });
@@ -132,7 +85,7 @@ export const priceListProgressSchema = z.object({
 });
 export type PriceListProgress = z.infer<typeof priceListProgressSchema>;
 
-const personSchema = z.object({ id: z.string().uuid(), name: z.string() }).nullable();
+const personSchema = z.object({ id: uuidSchema, name: z.string() }).nullable();
 
 /** What the commit wrote, counted by the database. */
 export const priceListAppliedSchema = z.object({
@@ -143,33 +96,35 @@ export const priceListAppliedSchema = z.object({
 });
 export type PriceListApplied = z.infer<typeof priceListAppliedSchema>;
 
-export const priceListSchema = z.object({
-  id: z.string().uuid(),
-  supplierId: z.string().uuid(),
-  supplierName: z.string(),
-  fileName: z.string(),
-  sha256: z.string(),
-  sizeBytes: z.number().int(),
-  encoding: z.string().nullable(),
-  delimiter: z.string().nullable(),
-  /** The file's headers, in file order. */
-  columns: z.array(z.string()),
-  mapping: mappingSchema,
-  mappingSource: z.enum(['given', 'remembered', 'guessed']),
-  status: z.enum(PRICE_LIST_STATUSES),
-  /** Another list of this supplier was committed after this one was compared: preview again before committing. */
-  stale: z.boolean(),
-  counts: priceListCountsSchema.nullable(),
-  flagged: z.number().int(),
-  flagThresholdPct: z.number().nullable(),
-  progress: priceListProgressSchema,
-  applied: priceListAppliedSchema.nullable(),
-  createdBy: personSchema,
-  createdAt: z.string(),
-  committedBy: personSchema,
-  committedAt: z.string().nullable(),
-  discardedAt: z.string().nullable(),
-});
+export const priceListSchema = z
+  .object({
+    id: uuidSchema,
+    supplierId: uuidSchema,
+    supplierName: z.string(),
+    fileName: z.string(),
+    sha256: z.string(),
+    sizeBytes: z.number().int(),
+    encoding: z.string().nullable(),
+    delimiter: z.string().nullable(),
+    /** The file's headers, in file order. */
+    columns: z.array(z.string()),
+    mapping: mappingSchema,
+    mappingSource: z.enum(['given', 'remembered', 'guessed']),
+    status: z.enum(PRICE_LIST_STATUSES),
+    /** Another list of this supplier was committed after this one was compared: preview again before committing. */
+    stale: z.boolean(),
+    counts: priceListCountsSchema.nullable(),
+    flagged: z.number().int(),
+    flagThresholdPct: z.number().nullable(),
+    progress: priceListProgressSchema,
+    applied: priceListAppliedSchema.nullable(),
+    createdBy: personSchema,
+    createdAt: timestampSchema,
+    committedBy: personSchema,
+    committedAt: timestampSchema.nullable(),
+    discardedAt: timestampSchema.nullable(),
+  })
+  .meta({ id: 'PriceList' });
 export type PriceList = z.infer<typeof priceListSchema>;
 
 export const priceListHistorySchema = z.object({ priceLists: z.array(priceListSchema), total: z.number().int() });
@@ -183,43 +138,47 @@ export const SUPERSESSION_STATES = ['link', 'already', 'not-found', 'kind-mismat
 export type SupersessionState = (typeof SUPERSESSION_STATES)[number];
 
 /** One line of the preview tables. Money in cents; `old…` is null for a new part or a first price. */
-export const priceListChangeSchema = z.object({
-  line: z.number().int(),
-  type: z.enum(['new', 'changed', 'unchanged']),
-  partId: z.string().uuid().nullable(),
-  partNumber: z.string(),
-  brand: z.string(),
-  description: z.string().nullable(),
-  kind: z.enum(['coil', 'plug']).nullable(),
-  oldCostCents: z.number().int().nullable(),
-  newCostCents: z.number().int(),
-  oldListCents: z.number().int().nullable(),
-  newListCents: z.number().int(),
-  oldCoreCents: z.number().int().nullable(),
-  /** Null when the file gives no core charge (the current one is kept). */
-  newCoreCents: z.number().int().nullable(),
-  oldPackQty: z.number().int().nullable(),
-  newPackQty: z.number().int().nullable(),
-  costChangePct: z.number().nullable(),
-  listChangePct: z.number().nullable(),
-  flagged: z.boolean(),
-  /** For a new part: whether the file carried a complete spec (else it shows "no spec — no verdict"). */
-  specStored: z.boolean(),
-  supersedes: z.string().nullable(),
-  supersession: z.enum(SUPERSESSION_STATES).nullable(),
-});
+export const priceListChangeSchema = z
+  .object({
+    line: z.number().int(),
+    type: z.enum(['new', 'changed', 'unchanged']),
+    partId: uuidSchema.nullable(),
+    partNumber: z.string(),
+    brand: z.string(),
+    description: z.string().nullable(),
+    kind: z.enum(['coil', 'plug']).nullable(),
+    oldCostCents: z.number().int().nullable(),
+    newCostCents: z.number().int(),
+    oldListCents: z.number().int().nullable(),
+    newListCents: z.number().int(),
+    oldCoreCents: z.number().int().nullable(),
+    /** Null when the file gives no core charge (the current one is kept). */
+    newCoreCents: z.number().int().nullable(),
+    oldPackQty: z.number().int().nullable(),
+    newPackQty: z.number().int().nullable(),
+    costChangePct: z.number().nullable(),
+    listChangePct: z.number().nullable(),
+    flagged: z.boolean(),
+    /** For a new part: whether the file carried a complete spec (else it shows "no spec — no verdict"). */
+    specStored: z.boolean(),
+    supersedes: z.string().nullable(),
+    supersession: z.enum(SUPERSESSION_STATES).nullable(),
+  })
+  .meta({ id: 'PriceListChange' });
 export type PriceListChange = z.infer<typeof priceListChangeSchema>;
 
 export const priceListChangesSchema = z.object({ changes: z.array(priceListChangeSchema), total: z.number().int() });
 export type PriceListChanges = z.infer<typeof priceListChangesSchema>;
 
-export const priceListRowErrorSchema = z.object({
-  line: z.number().int(),
-  /** The header as printed in the file; null when the line as a whole is wrong. */
-  column: z.string().nullable(),
-  field: z.string().nullable(),
-  message: z.string(),
-});
+export const priceListRowErrorSchema = z
+  .object({
+    line: z.number().int(),
+    /** The header as printed in the file; null when the line as a whole is wrong. */
+    column: z.string().nullable(),
+    field: z.string().nullable(),
+    message: z.string(),
+  })
+  .meta({ id: 'PriceListRowError' });
 export type PriceListRowError = z.infer<typeof priceListRowErrorSchema>;
 
 /** `total` counts reasons; a line rejected for two reasons has two entries. */

@@ -1,27 +1,21 @@
-import type { Mapping } from '../../../shared/price-list/mapping';
+import type { Mapping } from '../../shared/price-list/mapping';
 import type {
+  CommitPriceListResponse,
   PriceList,
   PriceListApplied,
   PriceListChange,
+  PriceListChanges,
   PriceListCounts,
+  PriceListErrors,
+  PriceListHistory,
   PriceListProgress,
   PriceListRowError,
   PriceListStatus,
   SupersessionState,
-} from '../../../shared/schemas/price-list';
-import type { PartKind } from '../../../shared/schemas/specs';
+} from '../../shared/schemas/price-lists';
+import type { PartKind } from '../../shared/schemas/specs';
 
-/** The one way a price_list row (with its supplier and people joined) becomes JSON. */
-export const PRICE_LIST_SELECT = `
-SELECT pl.id, pl.supplier_id, s.name AS supplier_name, pl.file_name, pl.sha256, pl.size_bytes, pl.encoding, pl.delimiter,
-       pl.columns, pl.mapping, pl.mapping_source, pl.status, pl.stale, pl.counts, pl.flagged, pl.flag_threshold_pct,
-       pl.progress, pl.applied, pl.created_by, cu.name AS created_by_name, pl.created_at,
-       pl.committed_by, mu.name AS committed_by_name, pl.committed_at, pl.discarded_at
-  FROM price_list pl
-  JOIN supplier s ON s.id = pl.supplier_id
-  LEFT JOIN "user" cu ON cu.id = pl.created_by
-  LEFT JOIN "user" mu ON mu.id = pl.committed_by`;
-
+/** A price_list row with its supplier's name and its people's names joined. */
 export interface PriceListRecord {
   id: string;
   supplier_id: string;
@@ -151,3 +145,15 @@ export interface RowErrorRecord {
 export function presentRowError(r: RowErrorRecord): PriceListRowError {
   return { line: r.line, column: r.column, field: r.field, message: r.message };
 }
+
+export const presentPriceListHistory = (rows: PriceListRecord[], total: number): PriceListHistory => ({
+  priceLists: rows.map(presentPriceList),
+  total,
+});
+
+export const presentChanges = (rows: ChangeRecord[], total: number): PriceListChanges => ({ changes: rows.map(presentChange), total });
+
+export const presentRowErrors = (rows: RowErrorRecord[], total: number): PriceListErrors => ({ errors: rows.map(presentRowError), total });
+
+/** POST .../commit: the list as committed, and what could not follow (search index, e-mail). */
+export const presentCommitted = (r: PriceListRecord, notices: string[]): CommitPriceListResponse => ({ ...presentPriceList(r), notices });

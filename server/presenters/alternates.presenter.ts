@@ -1,0 +1,28 @@
+import type { Check, Verdict } from '../../shared/compat';
+import type { Role } from '../../shared/roles';
+import type { AlternatesResponse } from '../../shared/schemas/alternates';
+import { presentCheck } from './compat.presenter';
+import { presentPart, type PartRow } from './part.presenter';
+import { sellPrice, type PriceRow } from './stock-price.presenter';
+
+export interface AlternatesRecord {
+  /** The engine's fitted part of the kind asked for; null when none is on file. */
+  original: PartRow | null;
+  /** Ranked best first (compat-model.md §7). */
+  alternates: { row: PartRow; verdict: Verdict; deviation: number; checks: Check[]; inStock: boolean; prices: PriceRow[] }[];
+}
+
+/** GET /api/engines/:id/alternates: the ranking, with the sell price as the role may see it. */
+export function presentAlternates(r: AlternatesRecord, role: Role): AlternatesResponse {
+  return {
+    original: r.original && presentPart(r.original),
+    alternates: r.alternates.map((a) => ({
+      part: presentPart(a.row),
+      verdict: a.verdict,
+      deviation: a.deviation,
+      checks: a.checks.map(presentCheck),
+      inStock: a.inStock,
+      price: sellPrice(a.prices, role),
+    })),
+  };
+}
