@@ -13,7 +13,7 @@ import { seedScale } from '../../seed/scale';
  */
 async function main(): Promise<void> {
   const local = await startLocalServices({ ...process.env, SMTP_URL: undefined, MEILI_HOST: undefined });
-  const env = loadEnv({ ...process.env, ...local.env, PORT: '0', NODE_ENV: 'production', LOGIN_MAX_PER_ADDRESS: '1000' });
+  const env = loadEnv({ ...process.env, ...local.env, PORT: '0', NODE_ENV: 'production', LOGIN_MAX_PER_CLIENT: '1000' });
   const deps = await buildDeps(env);
   await seedAll(deps.dataSource);
   const scale = await seedScale(env.DATABASE_URL);
