@@ -24,6 +24,8 @@ export function authRoutes(deps: AppDeps, csrf: ReturnType<typeof csrfProtection
   });
 
   mount(r, 'GET /api/auth/csrf', (req, res) => {
+    // The token is bound to the session id: a visitor not signed in gets a session kept for it.
+    req.session.csrfIssuedAt ??= Date.now();
     res.json({ token: csrf.generateCsrfToken(req, res, { overwrite: false }) });
   });
 
