@@ -22,6 +22,8 @@ const envSchema = z.object({
   LOGIN_MAX_PER_ACCOUNT_AND_CLIENT: z.coerce.number().int().positive().default(5),
   LOGIN_MAX_PER_CLIENT: z.coerce.number().int().positive().default(30),
   LOGIN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+  /** Calls allowed per API key per minute. */
+  API_KEY_MAX_PER_MINUTE: z.coerce.number().int().positive().default(600),
   STATIC_DIR: z.string().optional(),
 });
 

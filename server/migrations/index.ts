@@ -3,6 +3,7 @@ import { Catalog1764600100000 } from './1764600100000-Catalog';
 import { PriceLists1764600200000 } from './1764600200000-PriceLists';
 import { FitReports1764600300000 } from './1764600300000-FitReports';
 import { RateLimits1764600500000 } from './1764600500000-RateLimits';
+import { ApiKeys1764600510000 } from './1764600510000-ApiKeys';
 
 // Listed explicitly: globs find nothing under tsx and vitest.
 export const MIGRATIONS = [
@@ -11,4 +12,5 @@ export const MIGRATIONS = [
   PriceLists1764600200000,
   FitReports1764600300000,
   RateLimits1764600500000,
+  ApiKeys1764600510000,
 ];

@@ -20,6 +20,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/team', label: 'Team', roles: ['admin'] },
   { to: '/outbox', label: 'Outbox', roles: ['admin'] },
   { to: '/settings', label: 'Settings', roles: ['admin'] },
+  { to: '/api-keys', label: 'API keys', roles: ['admin'] },
 ];
 
 export const navFor = (role: Role): NavItem[] => NAV_ITEMS.filter((i) => i.roles.includes(role));
