@@ -4,6 +4,7 @@ import { createDataSource } from './db/data-source';
 import type { AppDeps } from './deps';
 import { createMailer } from './mail/mailer';
 import { PartSearchIndex } from './search/search-index';
+import { keyCallsRecorded } from './services/api-keys.service';
 
 /** Database first, then everything that depends on it; the app is built from these. */
 export async function buildDeps(env: Env): Promise<AppDeps> {
@@ -17,6 +18,7 @@ export async function buildDeps(env: Env): Promise<AppDeps> {
 }
 
 export async function closeDeps(deps: AppDeps): Promise<void> {
+  await keyCallsRecorded();
   deps.mailer.close();
   await deps.pool.end();
   await deps.dataSource.destroy();

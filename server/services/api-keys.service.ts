@@ -81,17 +81,30 @@ export interface KeyCall {
   status: number;
 }
 
+/** Audit writes of key calls still under way: each starts when its answer has gone out. */
+const recording = new Set<Promise<void>>();
+
 /** Every call made with a key goes into the audit log under the key's name; last use is kept to the minute. */
-export async function recordKeyCall(ds: DataSource, key: Pick<ApiKeyEntity, 'id' | 'name'>, call: KeyCall): Promise<void> {
-  await audit(ds.manager, {
-    actorId: null,
-    action: 'api-key.call',
-    entityType: 'api_key',
-    entityId: key.id,
-    data: { key: key.name, method: call.method, path: call.path.slice(0, 500), status: call.status },
-  });
-  await ds.query(
-    `UPDATE api_key SET last_used_at = now() WHERE id = $1 AND (last_used_at IS NULL OR last_used_at < now() - interval '1 minute')`,
-    [key.id],
-  );
+export function recordKeyCall(ds: DataSource, key: Pick<ApiKeyEntity, 'id' | 'name'>, call: KeyCall): Promise<void> {
+  const write = (async () => {
+    await audit(ds.manager, {
+      actorId: null,
+      action: 'api-key.call',
+      entityType: 'api_key',
+      entityId: key.id,
+      data: { key: key.name, method: call.method, path: call.path.slice(0, 500), status: call.status },
+    });
+    await ds.query(
+      `UPDATE api_key SET last_used_at = now() WHERE id = $1 AND (last_used_at IS NULL OR last_used_at < now() - interval '1 minute')`,
+      [key.id],
+    );
+  })();
+  recording.add(write);
+  void write.finally(() => recording.delete(write)).catch(() => undefined);
+  return write;
+}
+
+/** Waits for the audit rows of calls already answered, so a shutdown does not lose them. */
+export async function keyCallsRecorded(): Promise<void> {
+  await Promise.allSettled([...recording]);
 }
