@@ -5,12 +5,14 @@ import express, { Router, type Express } from 'express';
 import helmet from 'helmet';
 import type { PassportStatic } from 'passport';
 import type { AppDeps } from './deps';
+import { apiKeyAuth, forPeople } from './middleware/api-key';
 import { csrfErrorToAppError, csrfProtection } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { configurePassport } from './middleware/passport';
 import { sessionMiddleware } from './middleware/session';
 import { docsPage, openApiRoutes } from './openapi/docs.routes';
 import { checkResponses } from './openapi/response-check';
+import { apiKeyRoutes } from './routes/api-keys.routes';
 import { authRoutes } from './routes/auth.routes';
 import { catalogRoutes } from './routes/catalog.routes';
 import { compatRoutes } from './routes/compat.routes';
@@ -34,6 +36,7 @@ export function buildApiRouter(deps: AppDeps, csrf: ReturnType<typeof csrfProtec
   api.use(priceListRoutes(deps));
   api.use(jobsRoutes(deps));
   api.use(openApiRoutes());
+  api.use(apiKeyRoutes(deps));
   return api;
 }
 
@@ -61,9 +64,11 @@ export function createApp(deps: AppDeps): Express {
   if (deps.env.NODE_ENV === 'test') app.use('/api', checkResponses());
   app.use('/api', express.json({ limit: '2mb' }));
   app.use(cookieParser());
-  app.use(sessionMiddleware(deps));
+  // A call with an API key is judged by the key alone: no session is read for it, none is made.
+  app.use('/api', apiKeyAuth(deps));
+  app.use(forPeople(sessionMiddleware(deps)));
   const passport = configurePassport(deps.dataSource);
-  app.use(passport.session());
+  app.use(forPeople(passport.session()));
 
   const csrf = csrfProtection(deps.env);
   app.use('/api', csrf.doubleCsrfProtection, csrfErrorToAppError);

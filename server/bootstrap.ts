@@ -5,6 +5,7 @@ import type { AppDeps } from './deps';
 import { JobQueue } from './jobs/queue';
 import { createMailer } from './mail/mailer';
 import { PartSearchIndex } from './search/search-index';
+import { keyCallsRecorded } from './services/api-keys.service';
 
 /** Database first, then everything that depends on it; the app is built from these. */
 export async function buildDeps(env: Env): Promise<AppDeps> {
@@ -21,6 +22,7 @@ export async function buildDeps(env: Env): Promise<AppDeps> {
 }
 
 export async function closeDeps(deps: AppDeps): Promise<void> {
+  await keyCallsRecorded();
   await deps.jobs.stop();
   deps.mailer.close();
   await deps.pool.end();

@@ -7,6 +7,8 @@ export class AppError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly details?: unknown,
+    /** Sent as the Retry-After header (seconds): with a 429. */
+    readonly retryAfterSeconds?: number,
   ) {
     super(message);
     this.name = 'AppError';
@@ -26,5 +28,8 @@ export class AppError extends Error {
   }
   static conflict(message: string, details?: unknown): AppError {
     return new AppError(409, 'conflict', message, details);
+  }
+  static rateLimited(message: string, retryAfterMs: number): AppError {
+    return new AppError(429, 'rate_limited', message, undefined, Math.max(1, Math.ceil(retryAfterMs / 1000)));
   }
 }

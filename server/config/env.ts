@@ -18,9 +18,12 @@ const envSchema = z.object({
   MEILI_HOST: z.string().url().optional(),
   MEILI_API_KEY: z.string().optional(),
   MEILI_INDEX: z.string().default('parts'),
-  LOGIN_MAX_PER_ACCOUNT: z.coerce.number().int().positive().default(5),
-  LOGIN_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(30),
+  /** Failed sign-ins allowed per (e-mail, client address), then per client address, in one window. */
+  LOGIN_MAX_PER_ACCOUNT_AND_CLIENT: z.coerce.number().int().positive().default(5),
+  LOGIN_MAX_PER_CLIENT: z.coerce.number().int().positive().default(30),
   LOGIN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+  /** Calls allowed per API key per minute. */
+  API_KEY_MAX_PER_MINUTE: z.coerce.number().int().positive().default(600),
   STATIC_DIR: z.string().optional(),
   /** 0: this process only enqueues follow-up jobs; another process works them. */
   JOB_WORKERS: boolish.default(true),

@@ -1,3 +1,4 @@
+import { ApiKeyEntity } from './api-key.entity';
 import { AuditLogEntity } from './audit-log.entity';
 import { BrandHeatCodeEntity } from './brand-heat-code.entity';
 import { BrandEntity } from './brand.entity';
@@ -21,6 +22,7 @@ import { UserEntity } from './user.entity';
 import { VehicleEntity } from './vehicle.entity';
 
 export {
+  ApiKeyEntity,
   AuditLogEntity,
   BrandEntity,
   BrandHeatCodeEntity,
@@ -59,4 +61,5 @@ export const ENTITIES = [
   SupplierEntity,
   SupplierPriceEntity,
   ...[PriceListEntity, PriceListRowEntity, PriceListRowErrorEntity, PriceListFileChunkEntity],
+  ApiKeyEntity,
 ];

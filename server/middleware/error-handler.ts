@@ -26,6 +26,7 @@ export const notFoundHandler: RequestHandler = (req, _res, next) => {
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   void _next;
   if (err instanceof AppError) {
+    if (err.retryAfterSeconds !== undefined) res.setHeader('Retry-After', String(err.retryAfterSeconds));
     res.status(err.status).json(bodyOf(err.code, err.message, err.details));
     return;
   }

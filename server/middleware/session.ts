@@ -3,6 +3,13 @@ import session from 'express-session';
 import type { RequestHandler } from 'express';
 import type { AppDeps } from '../deps';
 
+declare module 'express-session' {
+  interface SessionData {
+    /** Set when a CSRF token is issued, so the visitor's session is kept and the token stays bound to it. */
+    csrfIssuedAt?: number;
+  }
+}
+
 export const SESSION_COOKIE = 'arcwise.sid';
 const EIGHT_HOURS_MS = 8 * 3600 * 1000;
 

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { errorBodySchema } from '../../shared/schemas/error';
 import { CSRF_HEADER } from '../middleware/csrf';
 import { SESSION_COOKIE } from '../middleware/session';
-import { ROUTE_ACCESS, type Access, type RouteKey } from '../routes/route-access';
+import { keyScopeOf, peopleAccess, ROUTE_ACCESS, type Access, type RouteKey } from '../routes/route-access';
 import { ROUTE_DOCS, TAGS, type Answer, type RouteDoc } from './route-docs';
 
 const DOCS: Record<RouteKey, RouteDoc> = ROUTE_DOCS;
@@ -24,12 +24,14 @@ const ERROR_WORDS: Record<number, string> = {
 /** Every status a route can answer with the error shape: implied by its inputs and access, plus its own. */
 export function errorStatuses(key: RouteKey): number[] {
   const doc = DOCS[key];
-  const access: Access = ROUTE_ACCESS[key];
+  const access: Access = peopleAccess(ROUTE_ACCESS[key]);
   const implied = new Set<number>([500, ...(doc.errors ?? [])]);
   if (doc.params || doc.query || doc.body || doc.form) implied.add(400);
-  if (access !== 'public') implied.add(401);
-  // A role list refuses the other roles; every state change refuses a missing CSRF token.
-  if (Array.isArray(access) || !key.startsWith('GET ')) implied.add(403);
+  if (access !== 'public' || keyScopeOf(ROUTE_ACCESS[key])) implied.add(401);
+  if (keyScopeOf(ROUTE_ACCESS[key])) implied.add(429);
+  // A role list refuses the other roles; every state change refuses a missing CSRF token; a route
+  // that names no key scope refuses every API key.
+  if (Array.isArray(access) || !key.startsWith('GET ') || !keyScopeOf(ROUTE_ACCESS[key])) implied.add(403);
   if (doc.params) implied.add(404);
   return [...implied].sort((a, b) => a - b);
 }
@@ -44,10 +46,12 @@ export function answerFor(key: RouteKey, status: number): Answer | undefined {
 /** "/api/parts/:id" → "/api/parts/{id}" */
 export const openApiPath = (expressPath: string) => expressPath.replace(/:(\w+)/g, '{$1}');
 
-function accessWords(access: Access): string {
-  if (access === 'public') return 'Public: no sign-in.';
-  if (access === 'signed-in') return 'Any signed-in user.';
-  return `Roles: ${access.join(', ')}.`;
+function accessWords(key: RouteKey): string {
+  const access = peopleAccess(ROUTE_ACCESS[key]);
+  const scope = keyScopeOf(ROUTE_ACCESS[key]);
+  const people =
+    access === 'public' ? 'Public: no sign-in.' : access === 'signed-in' ? 'Any signed-in user.' : `Roles: ${access.join(', ')}.`;
+  return scope ? `${people} API keys of scope ${scope}${scope === 'read' ? ' or write' : ''}.` : people;
 }
 
 function successContent(answer: Answer): ResponseConfig {
@@ -58,7 +62,8 @@ function successContent(answer: Answer): ResponseConfig {
 
 function routeConfig(key: RouteKey, errorBody: z.ZodType): RouteConfig {
   const doc = DOCS[key];
-  const access: Access = ROUTE_ACCESS[key];
+  const access: Access = peopleAccess(ROUTE_ACCESS[key]);
+  const scope = keyScopeOf(ROUTE_ACCESS[key]);
   const [verb, path] = key.split(' ') as [string, string];
   const method = verb.toLowerCase() as RouteConfig['method'];
   const responses: RouteConfig['responses'] = {};
@@ -85,9 +90,12 @@ function routeConfig(key: RouteKey, errorBody: z.ZodType): RouteConfig {
     operationId: key,
     tags: [doc.tag],
     summary: doc.summary,
-    description: [doc.description, accessWords(access)].filter(Boolean).join('\n\n'),
-    // Both apply together: a signed-in session and, for a state change, the CSRF header.
-    security: session.length || csrf.length ? [{ ...session[0], ...csrf[0] }] : [],
+    description: [doc.description, accessWords(key)].filter(Boolean).join('\n\n'),
+    // Either a signed-in session with, for a state change, the CSRF header; or an API key alone.
+    security: [
+      ...(session.length || csrf.length ? [{ ...session[0], ...csrf[0] }] : access === 'public' && scope ? [{}] : []),
+      ...(scope ? [{ apiKey: [] as string[] }] : []),
+    ],
     request,
     responses,
   };
@@ -107,6 +115,12 @@ export function buildOpenApiDocument(): ReturnType<OpenApiGeneratorV31['generate
     in: 'header',
     name: CSRF_HEADER,
     description: 'The token from `GET /api/auth/csrf`, on every state-changing request.',
+  });
+
+  registry.registerComponent('securitySchemes', 'apiKey', {
+    type: 'http',
+    scheme: 'bearer',
+    description: 'An API key made by an admin (`POST /api/api-keys`), as `Authorization: Bearer …`: no cookie and no CSRF token.',
   });
 
   for (const key of Object.keys(DOCS) as RouteKey[]) registry.registerPath(routeConfig(key, errorBodySchema));

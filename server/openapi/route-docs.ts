@@ -8,6 +8,7 @@ import {
   loginBodySchema,
   userResponseSchema,
 } from '../../shared/schemas/auth';
+import { apiKeyIdParamSchema, apiKeyListSchema, createApiKeyBodySchema, createdApiKeySchema } from '../../shared/schemas/api-keys';
 import { benchBodySchema, benchResultSchema } from '../../shared/schemas/bench';
 import { brandResponseSchema, brandsResponseSchema, createBrandBodySchema } from '../../shared/schemas/brands';
 import { idParamSchema } from '../../shared/schemas/common';
@@ -82,6 +83,7 @@ export const TAGS = [
   'suppliers',
   'price lists',
   'jobs',
+  'api keys',
 ] as const;
 
 export type SuccessStatus = 200 | 201 | 202 | 204;
@@ -180,6 +182,25 @@ export const ROUTE_DOCS = {
     params: jobIdParamSchema,
     responses: { 200: retryJobResponseSchema },
     errors: [404, 409],
+  },
+
+  'GET /api/api-keys': {
+    tag: 'api keys',
+    summary: "The store's API keys, without the keys themselves",
+    responses: { 200: apiKeyListSchema },
+  },
+  'POST /api/api-keys': {
+    tag: 'api keys',
+    summary: 'Make an API key for another system; the key is in this answer only',
+    body: createApiKeyBodySchema,
+    responses: { 201: createdApiKeySchema },
+    errors: [409],
+  },
+  'DELETE /api/api-keys/:id': {
+    tag: 'api keys',
+    summary: 'Revoke an API key: its next call is a 401',
+    params: apiKeyIdParamSchema,
+    responses: { 204: 'empty' },
   },
 
   'GET /api/vehicles/years': { tag: 'vehicles', summary: 'Model years on file', responses: { 200: vehicleYearsResponseSchema } },

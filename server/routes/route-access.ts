@@ -1,11 +1,23 @@
 import type { Role } from '../../shared/roles';
+import type { ApiKeyScope } from '../../shared/schemas/api-keys';
 
 /**
  * Who may call each API route: the one table the router mounts from and the role-matrix test
  * reads. `public` needs no sign-in; `signed-in` is any role; otherwise the roles listed.
  * A route missing here cannot be mounted (the key is typed) and fails the matrix test.
+ *
+ * API keys reach only the routes whose entry names a key scope ({ people, key }): the least
+ * scope that may call it, `write` including `read`. Every other route refuses a key with 403.
  */
 export type Access = 'public' | 'signed-in' | readonly Role[];
+export interface KeyedAccess {
+  people: Access;
+  key: ApiKeyScope;
+}
+export type RouteRule = Access | KeyedAccess;
+
+export const peopleAccess = (rule: RouteRule): Access => (typeof rule === 'object' && 'people' in rule ? rule.people : rule);
+export const keyScopeOf = (rule: RouteRule): ApiKeyScope | null => (typeof rule === 'object' && 'key' in rule ? rule.key : null);
 
 const ADMIN = ['admin'] as const;
 const BUYERS = ['buyer', 'admin'] as const;
@@ -13,10 +25,14 @@ const COUNTER = ['clerk', 'technician', 'buyer', 'admin'] as const;
 const COMPARE = ['clerk', 'technician', 'buyer', 'admin'] as const;
 // Bench testing is the shop technician's job (product.md, Roles); an admin may do everything.
 const BENCH = ['technician', 'admin'] as const;
+// The store's other systems: read keys look things up, write keys also keep the catalog and price lists.
+const COUNTER_OR_READ_KEY = { people: COUNTER, key: 'read' } as const;
+const COMPARE_OR_READ_KEY = { people: COMPARE, key: 'read' } as const;
+const BUYERS_OR_WRITE_KEY = { people: BUYERS, key: 'write' } as const;
 
 export const ROUTE_ACCESS = {
-  'GET /api/health': 'public',
-  'GET /api/openapi.json': 'public',
+  'GET /api/health': { people: 'public', key: 'read' },
+  'GET /api/openapi.json': { people: 'public', key: 'read' },
   'GET /api/auth/csrf': 'public',
   'POST /api/auth/login': 'public',
   'POST /api/auth/logout': 'public',
@@ -30,21 +46,21 @@ export const ROUTE_ACCESS = {
   'GET /api/outbox': ADMIN,
   'GET /api/jobs': ADMIN,
   'POST /api/jobs/:id/retry': ADMIN,
-  'GET /api/vehicles/years': COUNTER,
-  'GET /api/vehicles/makes': COUNTER,
-  'GET /api/vehicles/models': COUNTER,
-  'GET /api/vehicles/engines': COUNTER,
-  'GET /api/engines/:id': COUNTER,
-  'GET /api/search': COUNTER,
-  'GET /api/parts/:id': COUNTER,
-  'GET /api/brands': COUNTER,
-  'POST /api/brands': BUYERS,
-  'POST /api/parts': BUYERS,
-  'PATCH /api/parts/:id': BUYERS,
-  'POST /api/interchange': BUYERS,
-  'POST /api/compat/coil': COMPARE,
-  'POST /api/compat/plug': COMPARE,
-  'GET /api/engines/:id/alternates': COUNTER,
+  'GET /api/vehicles/years': COUNTER_OR_READ_KEY,
+  'GET /api/vehicles/makes': COUNTER_OR_READ_KEY,
+  'GET /api/vehicles/models': COUNTER_OR_READ_KEY,
+  'GET /api/vehicles/engines': COUNTER_OR_READ_KEY,
+  'GET /api/engines/:id': COUNTER_OR_READ_KEY,
+  'GET /api/search': COUNTER_OR_READ_KEY,
+  'GET /api/parts/:id': COUNTER_OR_READ_KEY,
+  'GET /api/brands': COUNTER_OR_READ_KEY,
+  'POST /api/brands': BUYERS_OR_WRITE_KEY,
+  'POST /api/parts': BUYERS_OR_WRITE_KEY,
+  'PATCH /api/parts/:id': BUYERS_OR_WRITE_KEY,
+  'POST /api/interchange': BUYERS_OR_WRITE_KEY,
+  'POST /api/compat/coil': COMPARE_OR_READ_KEY,
+  'POST /api/compat/plug': COMPARE_OR_READ_KEY,
+  'GET /api/engines/:id/alternates': COUNTER_OR_READ_KEY,
   'POST /api/bench/coil': BENCH,
   'GET /api/fit-reports': COMPARE,
   'POST /api/fit-reports': COMPARE,
@@ -53,18 +69,21 @@ export const ROUTE_ACCESS = {
   'GET /api/shared/fit-reports/:token': 'public',
   'GET /api/settings': ADMIN,
   'PUT /api/settings': ADMIN,
-  'GET /api/suppliers': BUYERS,
+  'GET /api/suppliers': BUYERS_OR_WRITE_KEY,
   'POST /api/suppliers': BUYERS,
   'PATCH /api/suppliers/:id': BUYERS,
-  'GET /api/price-lists': BUYERS,
-  'POST /api/price-lists': BUYERS,
-  'GET /api/price-lists/:id': BUYERS,
-  'GET /api/price-lists/:id/errors': BUYERS,
-  'GET /api/price-lists/:id/errors.csv': BUYERS,
-  'GET /api/price-lists/:id/changes': BUYERS,
-  'POST /api/price-lists/:id/preview': BUYERS,
-  'POST /api/price-lists/:id/commit': BUYERS,
-  'POST /api/price-lists/:id/discard': BUYERS,
-} as const satisfies Record<string, Access>;
+  'GET /api/price-lists': BUYERS_OR_WRITE_KEY,
+  'POST /api/price-lists': BUYERS_OR_WRITE_KEY,
+  'GET /api/price-lists/:id': BUYERS_OR_WRITE_KEY,
+  'GET /api/price-lists/:id/errors': BUYERS_OR_WRITE_KEY,
+  'GET /api/price-lists/:id/errors.csv': BUYERS_OR_WRITE_KEY,
+  'GET /api/price-lists/:id/changes': BUYERS_OR_WRITE_KEY,
+  'POST /api/price-lists/:id/preview': BUYERS_OR_WRITE_KEY,
+  'POST /api/price-lists/:id/commit': BUYERS_OR_WRITE_KEY,
+  'POST /api/price-lists/:id/discard': BUYERS_OR_WRITE_KEY,
+  'GET /api/api-keys': ADMIN,
+  'POST /api/api-keys': ADMIN,
+  'DELETE /api/api-keys/:id': ADMIN,
+} as const satisfies Record<string, RouteRule>;
 
 export type RouteKey = keyof typeof ROUTE_ACCESS;

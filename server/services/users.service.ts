@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { IsNull } from 'typeorm';
+import { passwordProblem } from '../../shared/password-policy';
 import { INVITE_TTL_HOURS, type AcceptInviteBody } from '../../shared/schemas/auth';
 import { type InviteBody, type UpdateUserBody } from '../../shared/schemas/users';
 import { InvitationEntity, ShopEntity, UserEntity } from '../entities';
@@ -74,6 +75,9 @@ export async function describeInvitation(ds: DataSource, token: string): Promise
 
 export async function acceptInvite(ds: DataSource, body: AcceptInviteBody): Promise<UserEntity> {
   const inv = await findOpenInvitation(ds, body.token);
+  const invited = await ds.getRepository(UserEntity).findOneByOrFail({ id: inv.userId });
+  const problem = passwordProblem(body.password, invited.email);
+  if (problem) throw new AppError(400, 'validation_failed', `password: ${problem}`, [{ field: 'password', message: problem }]);
   const passwordHash = await hashPassword(body.password);
   return ds.transaction(async (m) => {
     // Marking it used in the same statement that checks it keeps a double submit from using it twice.

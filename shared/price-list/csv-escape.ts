@@ -1,13 +1,12 @@
+import { defuseFormula, FORMULA_START } from './formula-text';
+
 /**
- * CSV export that a spreadsheet opens as data, not as formulas. Supplier cells are stored as
- * they came, so a cell such as =HYPERLINK(…) or @SUM(…) must be defused on every way out
+ * CSV export that a spreadsheet opens as data, not as formulas. Rejected lines keep their cells
+ * as they came, so a cell such as =HYPERLINK(…) or @SUM(…) must be defused on every way out
  * (rejected-rows download, history exports): a leading apostrophe makes Excel, LibreOffice and
  * Google Sheets show the text instead of evaluating it (the OWASP "CSV injection" advice).
  */
 
-// Tab and CR are on the list because some spreadsheets strip them and then read what follows;
-// leading spaces and full-width signs for the same reason.
-const FORMULA_START = /^[\t\r]|^\s*[=+\-@＝＋－＠]/;
 // Quoting also on ';' so a file opened with a semicolon locale cannot split a cell in two.
 const NEEDS_QUOTES = /[",;\r\n\t]|^\s|\s$/;
 
@@ -18,7 +17,7 @@ const NEEDS_QUOTES = /[",;\r\n\t]|^\s|\s$/;
 export function escapeCsvCell(value: string | number | null | undefined): string {
   if (value === null || value === undefined) return '';
   if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
-  const s = FORMULA_START.test(value) ? `'${value}` : value;
+  const s = FORMULA_START.test(value) ? defuseFormula(value) : value;
   return NEEDS_QUOTES.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 

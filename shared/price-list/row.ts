@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { GTIN_LENGTHS, gtinCheckDigit, isValidGtin } from '../gtin';
 import { parseMoney } from '../money';
 import { normalizePartNumber } from '../part-number';
+import { defuseFormula, formulaSign, startsLikeFormula } from './formula-text';
 import { coilSpecSchema, plugSpecSchema, type CoilSpec, type PART_KINDS, type PlugSpec } from '../schemas/specs';
 import {
   COIL_SPEC_FIELDS,
@@ -118,7 +119,12 @@ function converterFor(field: string, schema: z.ZodType): SpecConverter {
   if (inner instanceof z.ZodNumber) return numberConverter(field);
   if (inner instanceof z.ZodEnum) return enumConverter(inner.options.map(String));
   if (inner instanceof z.ZodBoolean) return booleanConverter;
-  return (cell) => ({ ok: true, value: cell });
+  return (cell) => (startsLikeFormula(cell) ? { ok: false, reason: formulaReason(cell, 'a code') } : { ok: true, value: cell });
+}
+
+/** Why a cell that starts like a formula is refused where text cannot be defused: a number or a code. */
+function formulaReason(cell: string, what: string): string {
+  return `${quote(cell)} starts with “${formulaSign(cell)}”, as a spreadsheet formula does; ${what} never does`;
 }
 
 function issueReason(issue: z.core.$ZodIssue): string {
@@ -226,13 +232,17 @@ export class RowValidator {
 
     const partNumber = this.required('partNumber');
     const partNumberNorm = partNumber === '' ? null : normalizePartNumber(partNumber);
-    if (partNumber.length > PRICE_LIST_LIMITS.maxPartNumberChars) {
+    if (startsLikeFormula(partNumber)) {
+      this.fail('partNumber', formulaReason(partNumber, 'a part number'));
+    } else if (partNumber.length > PRICE_LIST_LIMITS.maxPartNumberChars) {
       this.fail('partNumber', `longer than ${PRICE_LIST_LIMITS.maxPartNumberChars} characters`);
     } else if (partNumberNorm === '') {
       this.fail('partNumber', `${quote(partNumber)} has no letters or digits`);
     }
     const brand = this.required('brand');
-    if (brand.length > PRICE_LIST_LIMITS.maxBrandChars) {
+    if (startsLikeFormula(brand)) {
+      this.fail('brand', formulaReason(brand, 'a brand name'));
+    } else if (brand.length > PRICE_LIST_LIMITS.maxBrandChars) {
       this.fail('brand', `longer than ${PRICE_LIST_LIMITS.maxBrandChars} characters`);
     }
     const costCents = this.money('cost', true);
@@ -243,7 +253,9 @@ export class RowValidator {
 
     const supersedes = this.text('supersedes') || null;
     const supersedesNorm = supersedes === null ? null : normalizePartNumber(supersedes) || null;
-    if (supersedes !== null && supersedes.length > PRICE_LIST_LIMITS.maxPartNumberChars) {
+    if (supersedes !== null && startsLikeFormula(supersedes)) {
+      this.fail('supersedes', formulaReason(supersedes, 'a part number'));
+    } else if (supersedes !== null && supersedes.length > PRICE_LIST_LIMITS.maxPartNumberChars) {
       this.fail('supersedes', `longer than ${PRICE_LIST_LIMITS.maxPartNumberChars} characters`);
     } else if (supersedesNorm !== null && supersedesNorm === partNumberNorm) {
       this.fail('supersedes', 'the part cannot supersede itself');
@@ -281,7 +293,7 @@ export class RowValidator {
       partNumber,
       partNumberNorm,
       brand,
-      description: this.text('description') || null,
+      description: this.description(),
       costCents,
       listCents,
       coreCents,
@@ -338,6 +350,13 @@ export class RowValidator {
       this.fail(field, 'required, but the cell is empty');
     }
     return value;
+  }
+
+  /** Free text: one that starts like a formula is kept, defused, rather than costing the line. */
+  private description(): string | null {
+    const cell = this.text('description');
+    if (cell === '') return null;
+    return startsLikeFormula(cell) ? defuseFormula(cell) : cell;
   }
 
   private money(field: 'cost' | 'list' | 'core', isRequired: boolean): number | null {

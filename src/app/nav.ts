@@ -21,6 +21,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/outbox', label: 'Outbox', roles: ['admin'] },
   { to: '/jobs', label: 'Jobs', roles: ['admin'] },
   { to: '/settings', label: 'Settings', roles: ['admin'] },
+  { to: '/api-keys', label: 'API keys', roles: ['admin'] },
 ];
 
 export const navFor = (role: Role): NavItem[] => NAV_ITEMS.filter((i) => i.roles.includes(role));

@@ -1,5 +1,6 @@
 import { createBrowserRouter, Navigate } from 'react-router-dom';
 import { AppLayout } from '@/components/layout/app-layout';
+import { ApiKeysPage } from './routes/api-keys/api-keys';
 import { AcceptInvitePage } from './routes/auth/accept-invite';
 import { BenchPage } from './routes/bench/bench';
 import { CatalogPage } from './routes/catalog/catalog';
@@ -38,6 +39,7 @@ export const router = createBrowserRouter([
       { path: 'team', element: <TeamPage /> },
       { path: 'outbox', element: <OutboxPage /> },
       { path: 'jobs', element: <JobsPage /> },
+      { path: 'api-keys', element: <ApiKeysPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -23,6 +23,14 @@ export function setUnauthorizedHandler(fn: () => void): void {
   onUnauthorized = fn;
 }
 
+/**
+ * The token is bound to the server session, which sign-in replaces and sign-out ends: the auth
+ * feature calls this after both, so the next state change fetches a token for the new session.
+ */
+export function forgetCsrfToken(): void {
+  csrfToken = null;
+}
+
 async function fetchCsrfToken(): Promise<string> {
   const res = await fetch('/api/auth/csrf', { credentials: 'same-origin' });
   const { token } = csrfResponseSchema.parse(await res.json());

@@ -11,7 +11,7 @@ import { startLocalServices } from '../../server/local-services';
  */
 async function main(): Promise<void> {
   const local = await startLocalServices({ ...process.env, SMTP_URL: undefined, MEILI_HOST: undefined });
-  const env = loadEnv({ ...process.env, ...local.env, PORT: '0', NODE_ENV: 'production', LOGIN_MAX_PER_ADDRESS: '1000' });
+  const env = loadEnv({ ...process.env, ...local.env, PORT: '0', NODE_ENV: 'production', LOGIN_MAX_PER_CLIENT: '1000' });
   const deps = await buildDeps(env);
   const t0 = Date.now();
   const indexed = await deps.search.rebuild(deps.dataSource);

@@ -34,10 +34,12 @@ async function main(): Promise<void> {
     .set('x-csrf-token', token)
     .send({ email: process.env.CRASH_EMAIL, password: process.env.CRASH_PASSWORD })
     .expect(200);
+  // Sign-in replaced the session the first token was bound to.
+  const sessionToken = ((await agent.get('/api/auth/csrf').expect(200)).body as { token: string }).token;
   process.stdout.write('ready\n');
   const listId = await firstLine();
   process.stdout.write('committing\n');
-  const res = await agent.post(`/api/price-lists/${listId}/commit`).set('x-csrf-token', token);
+  const res = await agent.post(`/api/price-lists/${listId}/commit`).set('x-csrf-token', sessionToken);
   process.stdout.write(`done ${res.status}\n`);
   // Stays up until killed, like a server.
   setInterval(() => undefined, 60_000);

@@ -48,8 +48,10 @@ export async function csrfAgent(app: Express): Promise<{ agent: Agent; token: st
   return { agent, token: (res.body as { token: string }).token };
 }
 
+/** Signs in and fetches a new CSRF token: the token is bound to the session, which sign-in replaces. */
 export async function signIn(app: Express, email: string, password: string): Promise<{ agent: Agent; token: string }> {
   const { agent, token } = await csrfAgent(app);
   await agent.post('/api/auth/login').set('x-csrf-token', token).send({ email, password }).expect(200);
-  return { agent, token };
+  const fresh = await agent.get('/api/auth/csrf').expect(200);
+  return { agent, token: (fresh.body as { token: string }).token };
 }

@@ -461,7 +461,7 @@ describe('sample supplier CSVs', () => {
       .map((problems, i) => ({ line: i + 2, problems }))
       .filter((r) => r.problems.length > 0);
     expect(found.every((r) => r.problems.length === 1)).toBe(true);
-    // A formula-looking cell is kept as text (escaped on export), never a rejection.
+    // A formula-looking description is kept as text (defused on intake, escaped on export), never a rejection.
     expect(rows[11]?.Description).toBe('=SUM(D2:D9)');
     const readme = readCsv('README.md');
     const table = readme.slice(readme.indexOf('supplier-a-bad-rows.csv'));

@@ -1,5 +1,5 @@
 import { Readable, pipeline } from 'node:stream';
-import { CsvError, parse } from 'csv-parse';
+import { CsvError, parse, type Options } from 'csv-parse';
 import { PRICE_LIST_LIMITS } from '../../../shared/price-list/fields';
 import {
   applyRememberedMapping,
@@ -192,9 +192,10 @@ class LineReader {
 
 /**
  * Decodes the upload and picks the delimiter from its first 64 KiB, then hands those bytes and
- * the rest on as one UTF-8 stream. Whole-file refusals found in the sample reject here.
+ * the rest on as one UTF-8 stream. Whole-file refusals found in the sample reject here. The
+ * upload's row count (count-rows.ts) reads through this too, so it sees the text the parser sees.
  */
-async function openText(
+export async function openText(
   input: Readable | Buffer,
   maxFileBytes: number,
 ): Promise<{ decoder: PriceListDecoder; delimiter: Delimiter; text: Readable }> {
@@ -376,6 +377,23 @@ async function readHead(
   return { headers, headerLine: header.line, mapping, mappingSource, resolved, first };
 }
 
+/** How csv-parse reads a price list; RecordCounter (count-rows.ts) follows the same rules. */
+export function csvParseOptions(delimiter: Delimiter, maxRecordChars: number): Options {
+  return {
+    delimiter,
+    bom: false,
+    relax_quotes: true,
+    relax_column_count: true,
+    skip_empty_lines: false,
+    record_delimiter: ['\r\n', '\n', '\r'],
+    max_record_size: maxRecordChars,
+  };
+}
+
+export function tooManyRows(maxDataRows: number): PriceListFileError {
+  return new PriceListFileError('too-many-rows', `The file has more than ${maxDataRows.toLocaleString('en-US')} rows.`);
+}
+
 /**
  * Parses a supplier price list as a stream: decode → detect delimiter → csv-parse → map →
  * validate, one line at a time, with memory bounded by the duplicate index (one short entry
@@ -387,15 +405,7 @@ export async function parsePriceList(input: Readable | Buffer, opts: ParseOption
   const maxDataRows = opts.maxDataRows ?? PRICE_LIST_LIMITS.maxDataRows;
   const maxRecordChars = opts.maxRecordChars ?? PRICE_LIST_LIMITS.maxRecordChars;
   const { decoder, delimiter, text } = await openText(input, opts.maxFileBytes ?? PRICE_LIST_LIMITS.maxFileBytes);
-  const parser = parse({
-    delimiter,
-    bom: false,
-    relax_quotes: true,
-    relax_column_count: true,
-    skip_empty_lines: false,
-    record_delimiter: ['\r\n', '\n', '\r'],
-    max_record_size: maxRecordChars,
-  });
+  const parser = parse(csvParseOptions(delimiter, maxRecordChars));
   pipeline(text, parser, () => {});
   const reader = new LineReader(parser, maxRecordChars);
   const close = (): void => {
@@ -427,9 +437,8 @@ export async function parsePriceList(input: Readable | Buffer, opts: ParseOption
     let accepted = 0;
     try {
       for (let record: Line | null = first; record !== null; record = reader.take() ?? (await reader.read())) {
-        if (++dataLines > maxDataRows) {
-          throw new PriceListFileError('too-many-rows', `The file has more than ${maxDataRows.toLocaleString('en-US')} rows.`);
-        }
+        // The upload's own count (count-rows.ts) refuses such a file as it arrives; this stays the rule for any other input.
+        if (++dataLines > maxDataRows) throw tooManyRows(maxDataRows);
         const result = validator.validate(record.cells, record.line);
         const brand = result.ok ? result.row.brand : result.brand;
         const norm = result.ok ? result.row.partNumberNorm : result.partNumberNorm;

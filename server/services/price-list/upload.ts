@@ -1,22 +1,20 @@
-import { randomUUID } from 'node:crypto';
-import { tmpdir } from 'node:os';
 import type { Request, Response } from 'express';
 import multer from 'multer';
 import { PRICE_LIST_MAX_FILE_NAME, PRICE_LIST_UPLOAD_FIELD } from '../../../shared/schemas/price-lists';
 import { AppError } from '../../errors';
-import { tooLarge } from './file-refusal';
+import { countingDiskStorage } from './counting-storage';
+import { fileRefusal, tooLarge } from './file-refusal';
+import { PriceListFileError } from './parse';
 
 /**
  * Receives the multipart upload onto disk (not memory: a 50 MB file and the parse of it would
- * otherwise sit in the heap together), with the size limit from Settings. The caller deletes
+ * otherwise sit in the heap together), with the size limit from Settings, counting its rows on
+ * the way so a file over the row limit is refused as it arrives. The caller deletes
  * req.file.path when done.
  */
 export function receivePriceListUpload(req: Request, res: Response, maxFileBytes: number): Promise<void> {
   const upload = multer({
-    storage: multer.diskStorage({
-      destination: tmpdir(),
-      filename: (_req, _file, cb) => cb(null, `arcwise-price-list-${randomUUID()}`),
-    }),
+    storage: countingDiskStorage({ maxFileBytes }),
     limits: { fileSize: maxFileBytes, files: 1, fields: 10, fieldSize: 512 * 1024, parts: 12 },
     // Browsers send UTF-8 file names; busboy's default would read them as Latin-1.
     defParamCharset: 'utf8',
@@ -24,6 +22,7 @@ export function receivePriceListUpload(req: Request, res: Response, maxFileBytes
   return new Promise((resolve, reject) => {
     upload(req, res, (err: unknown) => {
       if (err === undefined || err === null) return resolve();
+      if (err instanceof PriceListFileError) return reject(fileRefusal(err, maxFileBytes));
       if (err instanceof multer.MulterError) {
         if (err.code === 'LIMIT_FILE_SIZE') return reject(tooLarge(maxFileBytes));
         return reject(

@@ -63,6 +63,32 @@ describe('invitation, end to end through real SMTP', () => {
     expect(login.body.user.role).toBe('clerk');
   });
 
+  it('the password rule at invitation: blank, common or the e-mail is a 400 naming the field; a good one is a 200', async () => {
+    const admin = await makeUser(t.deps.dataSource, 'admin');
+    const { agent, token } = await signIn(t.app, admin.email, TEST_PASSWORD);
+    const email = `rule-${randomUUID().slice(0, 6)}@example.test`;
+    await agent.post('/api/users/invite').set('x-csrf-token', token).send({ email, name: 'Rule Tester', role: 'clerk' }).expect(201);
+    const inviteToken = tokenFrom((await waitForMail(email)).text);
+    const fresh = await csrfAgent(t.app);
+    const accept = (password: string) =>
+      fresh.agent.post('/api/auth/accept-invite').set('x-csrf-token', fresh.token).send({ token: inviteToken, password });
+
+    const blank = await accept(' '.repeat(12));
+    expect(blank.status).toBe(400);
+    expect(blank.body.error).toMatchObject({ code: 'validation_failed', message: 'password: must not be blank or only spaces' });
+    expect(blank.body.error.details).toEqual([{ field: 'password', message: 'must not be blank or only spaces' }]);
+    // In the common-password list zxcvbn-ts ships (@zxcvbn-ts/language-common, passwords-common).
+    const common = await accept('password123');
+    expect(common.status).toBe(400);
+    expect(common.body.error.details[0].field).toBe('password');
+    expect(common.body.error.message).toMatch(/^password: is a common password/);
+    const own = await accept(email.toUpperCase());
+    expect(own.status).toBe(400);
+    expect(own.body.error.message).toBe('password: must not be your e-mail address or its name part');
+    // None of the refusals used the invitation up.
+    await accept('feeler-gauge-at-0.8mm').expect(200);
+  });
+
   it('an expired invitation is refused', async () => {
     const admin = await makeUser(t.deps.dataSource, 'admin');
     const { agent, token } = await signIn(t.app, admin.email, TEST_PASSWORD);

@@ -1,7 +1,9 @@
-import type request from 'supertest';
+import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ROLES, type Role } from '../../../shared/roles';
-import { ROUTE_ACCESS, type Access, type RouteKey } from '../../../server/routes/route-access';
+import { API_KEY_SCOPES, scopeCovers, type ApiKeyScope } from '../../../shared/schemas/api-keys';
+import { keyScopeOf, peopleAccess, ROUTE_ACCESS, type Access, type RouteKey, type RouteRule } from '../../../server/routes/route-access';
+import { createApiKey, revokeApiKey } from '../../../server/services/api-keys.service';
 import { mountedRoutes } from '../../helpers/api-routes';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { createTestApp, csrfAgent, signIn, type Agent, type TestApp } from '../../helpers/test-app';
@@ -13,6 +15,12 @@ function expected(access: Access, who: Role | 'anonymous'): 'allowed' | 401 | 40
   return 403;
 }
 
+/** A key reaches only routes that name a key scope its own covers; the role table does not apply to it. */
+function expectedForKey(rule: RouteRule, scope: ApiKeyScope): 'allowed' | 403 {
+  const needed = keyScopeOf(rule);
+  return needed !== null && scopeCovers(scope, needed) ? 'allowed' : 403;
+}
+
 const SAMPLE_PARAMS: Record<string, string> = { id: '00000000-0000-4000-8000-000000000000', token: 'no-such-token-0000000000000' };
 const concrete = (path: string) => path.replace(/:(\w+)/g, (_m, name: string) => SAMPLE_PARAMS[name] ?? 'sample');
 
@@ -22,6 +30,7 @@ const keys = (Object.keys(ROUTE_ACCESS) as RouteKey[]).sort((a, b) => Number(a.i
 describe('role matrix', () => {
   let t: TestApp;
   const agents = new Map<Role | 'anonymous', { agent: Agent; token: string }>();
+  const apiKeys = new Map<ApiKeyScope | 'revoked', string>();
   beforeAll(async () => {
     t = await createTestApp();
     agents.set('anonymous', await csrfAgent(t.app));
@@ -29,6 +38,13 @@ describe('role matrix', () => {
       const u = await makeUser(t.deps.dataSource, role);
       agents.set(role, await signIn(t.app, u.email, TEST_PASSWORD));
     }
+    const admin = await makeUser(t.deps.dataSource, 'admin');
+    for (const scope of API_KEY_SCOPES) {
+      apiKeys.set(scope, (await createApiKey(t.deps.dataSource, admin.id, { name: `matrix ${scope} ${admin.id}`, scope })).key);
+    }
+    const revoked = await createApiKey(t.deps.dataSource, admin.id, { name: `matrix revoked ${admin.id}`, scope: 'write' });
+    await revokeApiKey(t.deps.dataSource, admin.id, revoked.entity.id);
+    apiKeys.set('revoked', revoked.key);
   });
   afterAll(() => t.close());
 
@@ -41,7 +57,8 @@ describe('role matrix', () => {
 
   for (const key of keys) {
     const [method, path] = key.split(' ') as [string, string];
-    const access: Access = ROUTE_ACCESS[key];
+    const rule: RouteRule = ROUTE_ACCESS[key];
+    const access: Access = peopleAccess(rule);
     for (const who of ['anonymous', ...ROLES] as const) {
       const want = expected(access, who);
       it(`${key} as ${who} → ${want === 'allowed' ? 'passes the gate' : want}`, async () => {
@@ -53,6 +70,24 @@ describe('role matrix', () => {
         if (want === 'allowed') {
           expect([401, 403], `${key} ${who}: ${JSON.stringify(res.body)}`).not.toContain(res.status);
           expect(res.status).toBeLessThan(500);
+        } else {
+          expect(res.status).toBe(want);
+          expect(res.body.error.code).toBe(want === 401 ? 'unauthorized' : 'forbidden');
+        }
+      });
+    }
+    for (const scope of [...API_KEY_SCOPES, 'revoked'] as const) {
+      const want = scope === 'revoked' ? 401 : expectedForKey(rule, scope);
+      it(`${key} with a ${scope} API key and no cookie or CSRF token → ${want === 'allowed' ? 'passes the gate' : want}`, async () => {
+        const m = method.toLowerCase() as 'get' | 'post' | 'patch' | 'put' | 'delete';
+        const client = request(t.app);
+        let req = client[m](concrete(path)).set('Authorization', `Bearer ${apiKeys.get(scope)!}`);
+        if (m !== 'get') req = req.send({});
+        const res: request.Response = await req;
+        if (want === 'allowed') {
+          expect([401, 403], `${key} ${scope} key: ${JSON.stringify(res.body)}`).not.toContain(res.status);
+          expect(res.status).toBeLessThan(500);
+          expect(res.headers['set-cookie'], 'a key call makes no session').toBeUndefined();
         } else {
           expect(res.status).toBe(want);
           expect(res.body.error.code).toBe(want === 401 ? 'unauthorized' : 'forbidden');

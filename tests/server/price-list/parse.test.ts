@@ -364,19 +364,29 @@ describe('per-row rejections', () => {
     ]);
   });
 
-  it('keeps formula-looking cells as text, and a formula-looking amount is just a bad amount', async () => {
+  it('formula-leading text (OWASP "CSV injection"): a description is defused, a number or brand rejects its line', async () => {
+    const formula = '=HYPERLINK("http://x","y")';
+    const quoted = `"${formula.replace(/"/g, '""')}"`;
     const result = await collect(
       file(
-        '=HYPERLINK("http://x"),Arcfire,=SUM(D2:D9),1.00,2.00,,,coil',
+        `${quoted},Arcfire,Coil,1.00,2.00,,,coil`,
         'AX-2,@Arcfire,+cmd|/c calc,1.00,2.00,,,coil',
-        'AX-3,Arcfire,x,=1+1,-5,,,coil',
+        `AX-3,Arcfire,${quoted},1.00,2.00,,,coil`,
+        'AX-4,Arcfire,-,1.00,2.00,,,coil',
+        'AX-5,Arcfire,x,=1+1,-5,,,coil',
       ),
     );
-    expect(result.rows.map((r) => [r.partNumber, r.brand, r.description])).toEqual([
-      ['=HYPERLINK("http://x")', 'Arcfire', '=SUM(D2:D9)'],
-      ['AX-2', '@Arcfire', '+cmd|/c calc'],
+    // The apostrophe is what every spreadsheet reads as "text follows" (common practice).
+    expect(result.rows.map((r) => [r.partNumber, r.description])).toEqual([
+      ['AX-3', `'${formula}`],
+      // A lone dash is how suppliers write "none": not a formula.
+      ['AX-4', '-'],
     ]);
-    expect(errorsOf(result, 4)).toEqual(['Cost: "=1+1" is not an amount', 'List: "-5" is negative']);
+    expect(errorsOf(result, 2)).toEqual([
+      `Part No: ${JSON.stringify(formula)} starts with “=”, as a spreadsheet formula does; a part number never does`,
+    ]);
+    expect(errorsOf(result, 3)).toEqual(['Brand: "@Arcfire" starts with “@”, as a spreadsheet formula does; a brand name never does']);
+    expect(errorsOf(result, 6)).toEqual(['Cost: "=1+1" is not an amount', 'List: "-5" is negative']);
   });
 
   it('checks spec values against the spec schema ranges and infers the kind from them', async () => {
@@ -556,7 +566,8 @@ describe('sample files in seed/csv', () => {
       [15, 'Part Number'],
     ]);
     expect(result.rows.map((r) => r.line)).toEqual([2, 3, 7, 9, 11, 13, 14, 16, 17]);
-    expect(result.rows.find((r) => r.line === 13)?.description).toBe('=SUM(D2:D9)');
+    // Kept, defused behind an apostrophe (seed/csv/README.md).
+    expect(result.rows.find((r) => r.line === 13)?.description).toBe("'=SUM(D2:D9)");
   });
 });
 

@@ -22,8 +22,8 @@ interface Child {
   ready: Promise<void>;
   /** Hands the child the list to commit; resolves as it sends the request. */
   commit(listId: string): Promise<void>;
-  /** Resolves when the commit answered (before the kill). */
-  answered: Promise<void>;
+  /** Resolves with the commit's HTTP status when it answered (before the kill). */
+  answered: Promise<number>;
   kill(): Promise<void>;
 }
 
@@ -66,7 +66,7 @@ function startChild(email: string, appName: string): Child {
     for (const w of waiters) if (out.includes(w.word)) w.resolve();
   });
   child.stderr?.on('data', (d: Buffer) => (err += d.toString()));
-  const answered = until('done');
+  const answered = until('done').then(() => Number(/done (\d+)/.exec(out)?.[1]));
   return {
     appName,
     ready: until('ready'),
@@ -142,8 +142,12 @@ describe('a server killed during a commit', () => {
       const sentAt = performance.now();
       if ((await backends(child.appName)) > 0) outcomes.connectionsSeen++;
       let answeredAfter: number | null = null;
+      let answeredStatus: number | null = null;
       child.answered.then(
-        () => (answeredAfter = performance.now() - sentAt),
+        (status) => {
+          answeredAfter = performance.now() - sentAt;
+          answeredStatus = status;
+        },
         () => undefined,
       );
       await sleep(random() * commitMs);
@@ -152,6 +156,8 @@ describe('a server killed during a commit', () => {
       // The window follows the commit's length: a commit that finished before the kill tells it;
       // a kill that came first widens the window a little, so later kills reach the end too.
       commitMs = answeredAfter ?? commitMs * 1.1;
+      // A commit that answered before the kill was a real one, not a refusal.
+      if (answeredStatus !== null) expect(answeredStatus, `kill ${i}`).toBe(200);
 
       const state = await listState(ds, current.id);
       if (state.status === 'committed') {

@@ -125,30 +125,41 @@ describe('formula injection', () => {
   });
   afterAll(() => t.close());
 
-  it('keeps a cell starting with = + - @ as text and escapes it in the rejected-rows export', async () => {
+  it('defuses a description that starts like a formula, rejects such a part number with a reason, and escapes every export', async () => {
     const supplier = await newSupplier(buyer, 'Formulas');
-    const formulas = ['=HYPERLINK("http://evil.test","open")', '+1+2', '-2+3', '@SUM(A1:A2)'];
+    const tag = runTag();
+    const formula = '=HYPERLINK("http://x","y")';
+    const badCosts = ['+1+2', '-2+3', '@SUM(A1:A2)'];
     const file = csv([
-      ['Part Number', 'Brand', 'Description', 'Cost', 'List', 'Kind'],
-      ...formulas.map((f, i) => [`QW-IC 31${40 + i}`, 'Quaywell', f, 'n/a', '52.99', 'coil']),
-      ['QW-IC 3150', 'Quaywell', '=SUM(D2:D9)', '33.80', '68.99', 'coil'],
-      ['=cmd|/C calc!A0', 'Quaywell', 'x', '1.00', '2.00', 'coil'],
+      ['Part Number', 'Brand', 'Description', 'Cost', 'List', 'Kind', 'Supersedes'],
+      [`FX-${tag}-1`, 'Quaywell', formula, '33.80', '68.99', 'coil', null], // 2: kept, defused
+      [formula, 'Quaywell', 'Ignition coil', '33.80', '68.99', 'coil', null], // 3: rejected
+      [`FX-${tag}-2`, '+Quaywell', 'Ignition coil', '33.80', '68.99', 'coil', null], // 4: rejected
+      [`FX-${tag}-3`, 'Quaywell', 'Ignition coil', '33.80', '68.99', 'coil', '=A1'], // 5: rejected
+      ...badCosts.map((c, i) => [`FX-${tag}-${4 + i}`, 'Quaywell', formula, c, '52.99', 'coil', null]), // 6-8: not amounts
     ]);
     const list = await stage(buyer, { supplierId: supplier.id, file });
-    expect(list.counts).toMatchObject({ total: 6, rejected: 4 });
+    expect(list.counts).toMatchObject({ total: 7, new: 1, rejected: 6 });
 
-    // Accepted as text, stored as it came.
+    // The preview shows the description with its apostrophe (the page marks it); the commit stores that.
     const changes = (await buyer.agent.get(`/api/price-lists/${list.id}/changes`).expect(200)).body as PriceListChanges;
-    expect(changes.changes.map((c) => [c.partNumber, c.description])).toEqual([
-      ['QW-IC 3150', '=SUM(D2:D9)'],
-      ['=cmd|/C calc!A0', 'x'],
-    ]);
+    expect(changes.changes.map((c) => [c.partNumber, c.description])).toEqual([[`FX-${tag}-1`, `'${formula}`]]);
 
+    const errors = (await buyer.agent.get(`/api/price-lists/${list.id}/errors`).expect(200)).body as PriceListErrors;
+    const reason = (line: number) => errors.errors.filter((e) => e.line === line).map((e) => `${e.column}: ${e.message}`);
+    expect(reason(3)).toEqual([
+      `Part Number: ${JSON.stringify(formula)} starts with “=”, as a spreadsheet formula does; a part number never does`,
+    ]);
+    expect(reason(4)).toEqual(['Brand: "+Quaywell" starts with “+”, as a spreadsheet formula does; a brand name never does']);
+    expect(reason(5)).toEqual(['Supersedes: "=A1" starts with “=”, as a spreadsheet formula does; a part number never does']);
+    expect(reason(6)).toEqual(['Cost: "+1+2" is not an amount']);
+
+    // Rejected lines keep their cells as they came; the download escapes each formula cell.
     const res = await buyer.agent.get(`/api/price-lists/${list.id}/errors.csv`).expect(200);
     const rows = parse(res.text, { bom: true }) as string[][];
-    const descriptions = rows.slice(1).map((r) => r[5]);
+    const line3 = rows.find((r) => r[0] === '3')!;
+    expect(line3.slice(3, 4)).toEqual([`'${formula}`]);
     // A leading apostrophe makes a spreadsheet show the text (OWASP "CSV injection"; common practice).
-    expect(descriptions).toEqual(formulas.map((f) => `'${f}`));
     for (const row of rows) for (const cell of row) expect(cell).not.toMatch(/^[=+\-@]/);
   });
 });

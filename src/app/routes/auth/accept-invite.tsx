@@ -5,6 +5,7 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';
 import { useAcceptInvite, useInvitation } from '@/features/auth/api/accept-invite';
+import { usePasswordProblem } from '@/features/auth/use-password-problem';
 import { AuthCard } from './auth-card';
 
 export function AcceptInvitePage() {
@@ -15,10 +16,11 @@ export function AcceptInvitePage() {
   const [password, setPassword] = useState('');
   const [repeat, setRepeat] = useState('');
   const mismatch = repeat.length > 0 && repeat !== password;
+  const problem = usePasswordProblem(password, invitation.data?.invitation.email ?? '');
 
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    if (!mismatch) accept.mutate({ token, password });
+    if (!mismatch && !problem) accept.mutate({ token, password });
   };
 
   if (accept.isSuccess) {
@@ -47,7 +49,8 @@ export function AcceptInvitePage() {
             minLength={PASSWORD_MIN_LENGTH}
             value={password}
             onChange={(e) => setPassword(e.target.value)}
-            hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
+            hint={`At least ${PASSWORD_MIN_LENGTH} characters, not your e-mail, not a common password.`}
+            error={problem ? `The password ${problem}.` : undefined}
           />
           <TextField
             label="Repeat password"
@@ -59,7 +62,7 @@ export function AcceptInvitePage() {
             error={mismatch ? 'The two passwords differ.' : undefined}
           />
           <ErrorNote error={accept.error} />
-          <Button type="submit" disabled={accept.isPending || mismatch}>
+          <Button type="submit" disabled={accept.isPending || mismatch || problem !== null}>
             Set password
           </Button>
         </form>

@@ -1,9 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { userResponseSchema, type LoginBody } from '@shared/schemas/auth';
-import { api } from '@/lib/api-client';
+import { api, forgetCsrfToken } from '@/lib/api-client';
 import { authKeys } from './keys';
 
-export const login = (body: LoginBody) => api('POST', '/api/auth/login', { body, schema: userResponseSchema, allowUnauthorized: true });
+export async function login(body: LoginBody) {
+  const res = await api('POST', '/api/auth/login', { body, schema: userResponseSchema, allowUnauthorized: true });
+  forgetCsrfToken();
+  return res;
+}
 
 export function useLogin() {
   const qc = useQueryClient();

@@ -1,8 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
+import { api, forgetCsrfToken } from '@/lib/api-client';
 import { authKeys } from './keys';
 
-export const logout = () => api('POST', '/api/auth/logout');
+export async function logout(): Promise<void> {
+  await api('POST', '/api/auth/logout');
+  forgetCsrfToken();
+}
 
 export function useLogout() {
   const qc = useQueryClient();

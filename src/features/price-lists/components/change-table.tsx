@@ -1,4 +1,5 @@
 import { useState, type ReactNode } from 'react';
+import { isDefusedFormula } from '@shared/price-list/formula-text';
 import type { PriceListChange, PriceListChangeType, SupersessionState } from '@shared/schemas/price-lists';
 import { ErrorNote } from '@/components/ui/panel';
 import { usePriceListChanges } from '../api/get-price-list-changes';
@@ -73,9 +74,14 @@ const part: Column = {
 const description: Column = {
   header: 'Description',
   cell: (r) => (
-    <span className="block max-w-[18rem] truncate 2xl:max-w-[28rem]" title={r.description ?? undefined}>
-      {r.description ?? '—'}
-    </span>
+    <>
+      <span className="block max-w-[18rem] truncate 2xl:max-w-[28rem]" title={r.description ?? undefined}>
+        {r.description ?? '—'}
+      </span>
+      {r.description !== null && isDefusedFormula(r.description) && (
+        <span className="block text-xs text-review">Began like a spreadsheet formula: an apostrophe now keeps it as text.</span>
+      )}
+    </>
   ),
   className: 'text-ink-soft',
 };

@@ -1,0 +1,21 @@
+import type { ApiKey, CreatedApiKey } from '../../shared/schemas/api-keys';
+import type { ApiKeyEntity } from '../entities';
+
+/** A key as listed: its hash never leaves, and the key itself is not kept to leave. */
+export function presentApiKey(k: ApiKeyEntity): ApiKey {
+  return {
+    id: k.id,
+    name: k.name,
+    scope: k.scope,
+    prefix: k.prefix,
+    createdBy: k.creator ? { id: k.creator.id, name: k.creator.name } : null,
+    createdAt: k.createdAt.toISOString(),
+    lastUsedAt: k.lastUsedAt?.toISOString() ?? null,
+    revokedAt: k.revokedAt?.toISOString() ?? null,
+  };
+}
+
+/** The answer to creating a key: the one time the key is shown. */
+export function presentCreatedApiKey(k: ApiKeyEntity, key: string): CreatedApiKey {
+  return { id: k.id, name: k.name, scope: k.scope, key };
+}

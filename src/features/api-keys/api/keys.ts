@@ -1,0 +1,3 @@
+export const apiKeyKeys = {
+  list: ['api-keys'] as const,
+};
