@@ -2,6 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import type { ErrorBody } from '../../shared/schemas/error';
 import { AppError } from '../errors';
+import { SearchUnavailableError } from '../search/search-unavailable';
 
 interface PgError {
   code?: string;
@@ -31,6 +32,11 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   void _next;
   if (err instanceof AppError) {
     res.status(err.status).json(bodyOf(err.code, err.message, err.details));
+    return;
+  }
+  if (err instanceof SearchUnavailableError) {
+    console.error(`[arcwise] ${req.method} ${req.originalUrl}: search service unavailable:`, err.message);
+    res.status(503).json(bodyOf('search_unavailable', 'Search is unavailable right now; it has been logged. Try again shortly.'));
     return;
   }
   if (err instanceof ZodError) {
