@@ -9,11 +9,9 @@ import { fileURLToPath } from 'node:url';
 import { createStandinApp, createState } from './app';
 
 export interface SearchStandinOptions {
-  /** 0 picks a free port. */
-  port?: number;
+  port?: number; // 0 picks a free port
   host?: string;
-  /** When set, every route but /health wants `Authorization: Bearer <apiKey>`, as Meilisearch's master key. */
-  apiKey?: string;
+  apiKey?: string; // as Meilisearch's master key: every route but /health then wants `Authorization: Bearer <apiKey>`
   inProcess?: boolean;
 }
 
@@ -22,12 +20,16 @@ export interface RunningSearchStandin {
   close(): Promise<void>;
 }
 
+// A young generation large enough for a search's short-lived results, else promoted and collected with the whole index.
+const NODE_FLAGS = ['--max-semi-space-size=64', '--import', 'tsx'];
 const MAIN = fileURLToPath(new URL('./main.ts', import.meta.url));
 const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 
 export async function serveSearchStandin(options: SearchStandinOptions): Promise<RunningSearchStandin> {
   const host = options.host ?? '127.0.0.1';
   const server = createServer(createStandinApp(createState(), options.apiKey));
+  // Longer than the SDK's keep-alive, so a busy moment never closes a socket it is about to reuse.
+  server.keepAliveTimeout = 60_000;
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
     server.listen(options.port ?? 0, host, () => resolve());
@@ -50,7 +52,7 @@ async function forkSearchStandin(options: SearchStandinOptions): Promise<Running
     MEILI_BIND_HOST: options.host ?? '127.0.0.1',
     MEILI_MASTER_KEY: options.apiKey ?? '',
   };
-  const child = fork(MAIN, [], { cwd: ROOT, env, execArgv: ['--import', 'tsx'], stdio: ['ignore', 'inherit', 'inherit', 'ipc'] });
+  const child = fork(MAIN, [], { cwd: ROOT, env, execArgv: NODE_FLAGS, stdio: ['ignore', 'inherit', 'inherit', 'ipc'] });
   const url = await new Promise<string>((resolve, reject) => {
     child.once('message', (m: { url?: string }) => (m.url ? resolve(m.url) : reject(new Error('search stand-in sent no url'))));
     child.once('exit', (code) => reject(new Error(`search stand-in exited with ${code} before listening`)));

@@ -19,7 +19,7 @@ export const DEFAULT_SETTINGS: Settings = {
   rankingRules: ['words', 'typo', 'proximity', 'attribute', 'sort', 'exactness'],
 };
 
-export type SearchBody = Pick<SearchParams, 'filter' | 'facets' | 'sort' | 'limit' | 'offset'> & { q?: string | null };
+export type SearchBody = Pick<SearchParams, 'filter' | 'facets' | 'sort' | 'limit' | 'offset' | 'matchingStrategy'> & { q?: string | null };
 
 type Compare = (a: TextMatch, b: TextMatch) => number;
 
@@ -64,7 +64,7 @@ export class StandinIndex {
       this.settings[key] = value === null ? DEFAULT_SETTINGS[key] : (value as string[]);
     }
     this.text = null;
-    this.touch();
+    this.updatedAt = new Date().toISOString();
   }
 
   /** Adds documents, replacing (POST) or merging into (PUT) those with the same primary key. */
@@ -89,7 +89,7 @@ export class StandinIndex {
       }
     }
     if (this.settings.searchableAttributes.includes('*')) this.text = null;
-    this.touch();
+    this.updatedAt = new Date().toISOString();
     return docs.length;
   }
 
@@ -101,7 +101,7 @@ export class StandinIndex {
       this.text?.remove(id);
       deleted++;
     }
-    this.touch();
+    this.updatedAt = new Date().toISOString();
     return deleted;
   }
 
@@ -109,12 +109,8 @@ export class StandinIndex {
     const n = this.docs.size;
     this.docs.clear();
     this.text = null;
-    this.touch();
-    return n;
-  }
-
-  private touch(): void {
     this.updatedAt = new Date().toISOString();
+    return n;
   }
 
   /** Meilisearch's ranking rules in order; `proximity` is not modelled; `attr:asc|desc` sorts by a field. */
@@ -168,7 +164,9 @@ export class StandinIndex {
 
     const q = body.q ?? '';
     const words = queryWords(q);
-    const matches = words.length ? this.textIndex().search(words, filter, offset + limit) : this.placeholder(filter);
+    const matches = words.length
+      ? this.textIndex().search(words, filter, body.matchingStrategy === 'all' ? 0 : offset + limit)
+      : this.placeholder(filter);
     matches.sort(compare);
 
     const response: Record<string, unknown> = {

@@ -66,11 +66,12 @@ export class TextIndex {
 
   /**
    * Documents matching every word (the last as a prefix too), then, while fewer than `wanted` are
-   * found, those matching the words left after dropping the last ones (Meilisearch's "last" strategy).
+   * found, those matching the words left after dropping the last ones (Meilisearch's "last" strategy;
+   * `wanted` 0 is its "all").
    */
   search(words: string[], filter: Predicate | null, wanted: number): TextMatch[] {
     const found = new Map<string, TextMatch>();
-    for (let n = words.length; n > 0 && found.size < wanted; n--) {
+    for (let n = words.length; n > 0 && (n === words.length || found.size < wanted); n--) {
       for (const m of this.matchAll(words.slice(0, n), filter, n === words.length)) if (!found.has(m.id)) found.set(m.id, m);
     }
     return [...found.values()];
@@ -93,22 +94,21 @@ export class TextIndex {
     const isLast = (i: number) => prefixLast && i === last;
     let keep = filter ? (id: string) => filter(this.docs.get(id)!) : () => true;
     if (words.length > 1) {
-      // The rarest word first, counted without building results: a common word's thousands of
-      // documents are then walked, but only those the rarest word matched are scored.
-      const counts = words.map((word, i) => {
-        let n = 0;
+      // The rarest word's documents first, walked without building results (a boost of 0), so
+      // that for the common words only those documents are scored.
+      const walk = (i: number, visit: (id: string) => void) =>
         this.run(
-          word,
+          words[i]!,
           () => isLast(i),
-          () => {
-            n++;
-            return false;
-          },
+          (id) => (visit(id), false),
         );
+      const counts = words.map((_w, i) => {
+        let n = 0;
+        walk(i, () => n++);
         return n;
       });
-      const rarest = counts.indexOf(Math.min(...counts));
-      const gate = new Set(this.run(words[rarest]!, () => isLast(rarest), keep).map((r) => r.id as string));
+      const gate = new Set<string>();
+      walk(counts.indexOf(Math.min(...counts)), (id) => keep(id) && gate.add(id));
       if (gate.size === 0) return [];
       keep = (id) => gate.has(id);
     }
