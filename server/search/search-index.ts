@@ -1,4 +1,3 @@
-import { randomUUID } from 'node:crypto';
 import { Meilisearch, type Index, type SearchParams, type SearchResponse, type Task } from 'meilisearch';
 import type { DataSource } from 'typeorm';
 import { affectedPartIds, FILTERABLE_ATTRIBUTES, loadPartDocuments, SEARCHABLE_ATTRIBUTES, type PartDocument } from './part-document';
@@ -70,8 +69,9 @@ export class PartSearchIndex {
 
   /**
    * Every part into a new index, swapped with the live one, then the old one deleted. Rebuilds
-   * from this process wait for each other; the new index has a name of its own, so rebuilds
-   * from several app servers sharing one search service do not write into each other's.
+   * from this process wait for each other. The new index has one fixed name, so what a process
+   * killed mid-rebuild left behind is deleted by the next rebuild rather than piling up; app
+   * servers sharing one search service should therefore not rebuild at the same moment.
    */
   rebuild(ds: DataSource): Promise<number> {
     const run = this.rebuilding.then(() => this.rebuildNow(ds));
@@ -81,8 +81,10 @@ export class PartSearchIndex {
 
   private rebuildNow(ds: DataSource): Promise<number> {
     return guarded(async () => {
-      const next = `${this.uid}__next_${randomUUID().slice(0, 8)}`;
+      const next = `${this.uid}__next`;
       await this.configure(this.uid);
+      // What a rebuild killed midway left; the task fails, harmlessly, when there is none.
+      await this.client.deleteIndex(next).waitTask();
       await this.configure(next);
       try {
         const docs = await loadPartDocuments(ds);

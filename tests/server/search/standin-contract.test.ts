@@ -144,6 +144,11 @@ describe('search service contract (meilisearch SDK)', () => {
     expect(ids((await parts.search('platinun')).hits)).toEqual(['a6']);
   });
 
+  it('allows one typo, not two, in a word of five to eight characters', async () => {
+    // NRCI2280 is two swaps away from NRIC2208.
+    expect((await parts.search('NRCI2280')).hits).toEqual([]);
+  });
+
   it('ranks an exact number above one within a typo of it', async () => {
     // SFSP7731 and SFSP7732 are one substitution apart.
     expect(ids((await parts.search('SFSP7732')).hits)).toEqual(['a8', 'a7']);

@@ -62,9 +62,4 @@ describe('GET /api/search with a typo in the number', () => {
     expect(r.hits.length).toBeGreaterThan(0);
     expect(r.hits.every((h) => /canister/i.test(h.description))).toBe(true);
   });
-
-  it('does not stretch a short number: two typos in a seven-character number find nothing of it', async () => {
-    const r = await search('QW-C 7081');
-    expect(r.hits.map((h) => h.partNumber)).not.toContain('QW-CN 7001');
-  });
 });
