@@ -3,6 +3,7 @@ import { ZodError } from 'zod';
 import type { ErrorBody, ErrorCode } from '../../shared/schemas/error';
 import { fieldIssues, fieldSentence } from '../../shared/validation/field-issues';
 import { AppError } from '../errors';
+import { SearchUnavailableError } from '../search/search-unavailable';
 
 interface PgError {
   code?: string;
@@ -28,6 +29,11 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   if (err instanceof AppError) {
     if (err.retryAfterSeconds !== undefined) res.setHeader('Retry-After', String(err.retryAfterSeconds));
     res.status(err.status).json(bodyOf(err.code, err.message, err.details));
+    return;
+  }
+  if (err instanceof SearchUnavailableError) {
+    console.error(`[arcwise] ${req.method} ${req.originalUrl}: search service unavailable:`, err.message);
+    res.status(503).json(bodyOf('search_unavailable', 'Search is unavailable right now; it has been logged. Try again shortly.'));
     return;
   }
   if (err instanceof ZodError) {

@@ -245,6 +245,7 @@ export const ROUTE_DOCS = {
     description: "A number is looked up exactly first (ours, another brand's, superseded); typos and free text go to the search index.",
     query: searchQuerySchema,
     responses: { 200: searchResponseSchema },
+    errors: [503],
   },
   'GET /api/parts/:id': {
     tag: 'parts',

@@ -1,36 +1,23 @@
 /**
- * Runs the search stand-in on its own: `npx tsx server/search-standin/main.ts`.
- * MEILI_STANDIN_PORT (default 7701), MEILI_STANDIN_HOST (default 127.0.0.1) and, when the app's
- * client sends a key, MEILI_API_KEY to require it.
+ * The search stand-in as a process of its own (`npm run search:standin`), which several app servers
+ * can share: MEILI_PORT (default 7700), MEILI_BIND_HOST (default 127.0.0.1), and MEILI_MASTER_KEY to
+ * require that key, as Meilisearch does. Started by startSearchStandin(), it reports its URL over IPC
+ * and ends with its parent.
  */
-import { startSearchStandin } from './server';
+import { serveSearchStandin } from './server';
 
-const DEFAULT_PORT = 7701;
+const port = Number(process.env.MEILI_PORT || 7700);
+if (!Number.isInteger(port) || port < 0 || port > 65535)
+  throw new Error(`MEILI_PORT must be a port number, not "${process.env.MEILI_PORT}"`);
+const apiKey = process.env.MEILI_MASTER_KEY || undefined;
+const standin = await serveSearchStandin({ port, host: process.env.MEILI_BIND_HOST || '127.0.0.1', apiKey });
 
-async function main(): Promise<void> {
-  const portText = process.env.MEILI_STANDIN_PORT;
-  const port = portText ? Number(portText) : DEFAULT_PORT;
-  if (!Number.isInteger(port) || port < 0 || port > 65535) {
-    throw new Error(`MEILI_STANDIN_PORT must be a port number, got "${portText ?? ''}"`);
-  }
-  const apiKey = process.env.MEILI_API_KEY || undefined;
-  const standin = await startSearchStandin({ port, host: process.env.MEILI_STANDIN_HOST ?? '127.0.0.1', apiKey });
-  console.log(`Search stand-in (Meilisearch API) listening on ${standin.url}${apiKey ? ' (API key required)' : ''}`);
-
-  const stop = (): void => {
-    standin.close().then(
-      () => process.exit(0),
-      (error: unknown) => {
-        console.error(error);
-        process.exit(1);
-      },
-    );
-  };
-  process.once('SIGINT', stop);
-  process.once('SIGTERM', stop);
+const stop = (): void => void standin.close().finally(() => process.exit(0));
+process.once('SIGINT', stop);
+process.once('SIGTERM', stop);
+if (process.send) {
+  process.send({ url: standin.url });
+  process.once('disconnect', stop);
+} else {
+  console.log(`[arcwise] search stand-in (Meilisearch API) on ${standin.url}${apiKey ? ', master key required' : ''}`);
 }
-
-main().catch((error: unknown) => {
-  console.error(error);
-  process.exit(1);
-});

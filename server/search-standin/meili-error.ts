@@ -1,15 +1,5 @@
-/**
- * Errors in the shape Meilisearch answers with, `{ message, code, type, link }`, so the SDK's
- * `MeilisearchApiError.cause` carries the same fields against the stand-in as against a real server.
- */
-export type MeiliErrorType = 'invalid_request' | 'auth' | 'internal' | 'system';
-
-export interface MeiliErrorBody {
-  message: string;
-  code: string;
-  type: MeiliErrorType;
-  link: string;
-}
+/** Errors in Meilisearch's shape, `{ message, code, type, link }`, so the SDK reads them as it reads a real server's. */
+export type MeiliErrorType = 'invalid_request' | 'auth' | 'internal';
 
 export class MeiliError extends Error {
   constructor(
@@ -19,30 +9,20 @@ export class MeiliError extends Error {
     readonly type: MeiliErrorType = 'invalid_request',
   ) {
     super(message);
-    this.name = 'MeiliError';
   }
 
-  toBody(): MeiliErrorBody {
-    return {
-      message: this.message,
-      code: this.code,
-      type: this.type,
-      link: `https://docs.meilisearch.com/errors#${this.code}`,
-    };
+  toBody() {
+    return { message: this.message, code: this.code, type: this.type, link: `https://docs.meilisearch.com/errors#${this.code}` };
   }
 }
 
-export function indexNotFound(indexUid: string): MeiliError {
-  return new MeiliError(404, 'index_not_found', `Index \`${indexUid}\` not found.`);
-}
+export type MeiliErrorBody = ReturnType<MeiliError['toBody']>;
 
-export function badRequest(code: string, message: string): MeiliError {
-  return new MeiliError(400, code, message);
-}
+export const badRequest = (code: string, message: string): MeiliError => new MeiliError(400, code, message);
+export const indexNotFound = (uid: string): MeiliError => new MeiliError(404, 'index_not_found', `Index \`${uid}\` not found.`);
 
-/** Anything thrown that is not a MeiliError becomes an internal error, as Meilisearch reports it. */
+/** Anything else thrown becomes an internal error, as Meilisearch reports one. */
 export function toMeiliError(error: unknown): MeiliError {
   if (error instanceof MeiliError) return error;
-  const message = error instanceof Error ? error.message : String(error);
-  return new MeiliError(500, 'internal', message, 'internal');
+  return new MeiliError(500, 'internal', error instanceof Error ? error.message : String(error), 'internal');
 }

@@ -1,252 +1,213 @@
-/**
- * One index: its documents keyed by primary key, its settings, and the text index built from
- * them. The text index is kept up to date on every document change; it is rebuilt only when the
- * list of searchable fields changes (a new field under `searchableAttributes: ["*"]`, or a settings
- * update) or when stale entries from rewrites pile up, so loading 100,000 documents in batches
- * touches each document once.
- */
-import type { DocumentRecord } from './document-record';
-import { documentIdOf, inferPrimaryKey } from './document-ids';
-import type { JsonObject } from './field-paths';
-import { FieldStore } from './field-store';
-import type { DocumentPredicate } from './filter-evaluator';
-import { applySettingsPatch, defaultSettings, resolveSettings, type ResolvedSettings } from './index-settings';
-import { MeiliError } from './meili-error';
-import { TextIndex } from './text-index';
+/** One index of the stand-in: its documents, settings and searches, the text part through minisearch. */
+import { setImmediate as nextTurn } from 'node:timers/promises';
+import type { SearchParams } from 'meilisearch';
+import { compileFilter, type Doc, type Predicate } from './filter';
+import { badRequest } from './meili-error';
+import { queryWords, TextIndex, type TextMatch } from './text-index';
 
-export type WriteMode = 'replace' | 'update';
+export interface Settings {
+  searchableAttributes: string[];
+  filterableAttributes: string[];
+  sortableAttributes: string[];
+  rankingRules: string[];
+}
 
-/** How many stale text-index slots are tolerated beyond the live documents before a rebuild. */
-const STALE_SLOT_ALLOWANCE = 50_000;
-const MAX_CACHED_ORDERS = 8;
+export const DEFAULT_SETTINGS: Settings = {
+  searchableAttributes: ['*'],
+  filterableAttributes: [],
+  sortableAttributes: [],
+  rankingRules: ['words', 'typo', 'proximity', 'attribute', 'sort', 'exactness'],
+};
 
-export interface IndexInfo {
-  uid: string;
-  primaryKey: string | null;
-  createdAt: string;
-  updatedAt: string;
+export type SearchBody = Pick<SearchParams, 'filter' | 'facets' | 'sort' | 'limit' | 'offset' | 'matchingStrategy'> & { q?: string | null };
+
+type Compare = (a: TextMatch, b: TextMatch) => number;
+
+/** Documents go into the engine in slices, so searches are answered between them during a large write. */
+const SLICE = 1_000;
+
+function compareValues(a: unknown, b: unknown): number {
+  const missing = (v: unknown) => v === undefined || v === null;
+  if (missing(a) || missing(b)) return Number(missing(a)) - Number(missing(b));
+  if (typeof a === 'number' && typeof b === 'number') return a - b;
+  return String(a).localeCompare(String(b));
 }
 
 export class StandinIndex {
-  primaryKey: string | null;
-  readonly createdAt = new Date();
-  updatedAt = new Date();
-  /** Insertion order is `seq` order: a replaced document keeps its place, as in Meilisearch. */
-  readonly records = new Map<string, DocumentRecord>();
-  readonly bySeq = new Map<number, DocumentRecord>();
-  private settingsObject: JsonObject = defaultSettings();
-  private resolvedSettings: ResolvedSettings = resolveSettings(this.settingsObject);
-  /** Top-level fields in order of first appearance: the searchable list under `["*"]`. */
-  private readonly fieldOrder: string[] = [];
-  private readonly knownFields = new Set<string>();
-  private textIndex: TextIndex | null = null;
-  private nextSeq = 0;
-  /** Placeholder-search orders (by sort criteria), valid until the next change. */
-  private readonly orderCache = new Map<string, DocumentRecord[]>();
-  /** Field values by document for filters and facets, kept in step with every write. */
-  readonly fieldStore = new FieldStore(() => this.records.values());
+  readonly createdAt = new Date().toISOString();
+  updatedAt = this.createdAt;
+  settings: Settings = { ...DEFAULT_SETTINGS };
+  readonly docs = new Map<string, Doc>();
+  private text: TextIndex | null = null;
 
-  constructor(
-    readonly uid: string,
-    primaryKey: string | null = null,
-  ) {
-    this.primaryKey = primaryKey;
-  }
+  constructor(public primaryKey: string | null) {}
 
-  get settings(): JsonObject {
-    return this.settingsObject;
-  }
-
-  get resolved(): ResolvedSettings {
-    return this.resolvedSettings;
-  }
-
-  get documentCount(): number {
-    return this.records.size;
-  }
-
-  /** Top-level fields seen so far, for `facets: ["*"]` and stats. */
-  get fields(): readonly string[] {
-    return this.fieldOrder;
-  }
-
-  info(): IndexInfo {
-    return {
-      uid: this.uid,
-      primaryKey: this.primaryKey,
-      createdAt: this.createdAt.toISOString(),
-      updatedAt: this.updatedAt.toISOString(),
-    };
-  }
-
-  private touch(): void {
-    this.updatedAt = new Date();
-    this.orderCache.clear();
-  }
-
-  /**
-   * All records in the order a placeholder search with these sort criteria returns them. Sorting
-   * 100,000 records per query took tens of milliseconds; documents change far less often.
-   */
-  orderedRecords(key: string, sortAll: () => DocumentRecord[]): DocumentRecord[] {
-    let ordered = this.orderCache.get(key);
-    if (!ordered) {
-      if (this.orderCache.size >= MAX_CACHED_ORDERS) this.orderCache.clear();
-      ordered = sortAll();
-      this.orderCache.set(key, ordered);
+  /** Built on first use after a change of the searchable fields, from the documents held. */
+  private textIndex(): TextIndex {
+    if (!this.text) {
+      // `*` (Meilisearch's default) stands for the fields of the documents held when it is built.
+      const fields = this.settings.searchableAttributes;
+      const all = fields.includes('*') ? [...new Set([...this.docs.values()].flatMap((d) => Object.keys(d)))] : fields;
+      this.text = new TextIndex(all, this.primaryKey ?? 'id', this.docs);
+      for (const [id, doc] of this.docs) this.text.set(id, doc);
     }
-    return ordered;
+    return this.text;
   }
 
-  text(): TextIndex {
-    const fields = this.searchableFields();
-    if (!this.textIndex || !sameList(this.textIndex.fields, fields)) {
-      this.textIndex = new TextIndex(fields, this.resolvedSettings.typoDisabledAttributes);
-      this.textIndex.addAll(this.records.values());
+  updateSettings(patch: Partial<Settings>): void {
+    for (const key of Object.keys(DEFAULT_SETTINGS) as (keyof Settings)[]) {
+      const value: unknown = patch[key];
+      if (value === undefined) continue;
+      const code = `invalid_settings_${key.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)}`;
+      const ok = value === null || (Array.isArray(value) && value.every((v) => typeof v === 'string'));
+      if (!ok) throw badRequest(code, `\`${key}\` must be an array of strings.`);
+      this.settings[key] = value === null ? DEFAULT_SETTINGS[key] : (value as string[]);
     }
-    return this.textIndex;
+    this.text = null;
+    this.updatedAt = new Date().toISOString();
   }
 
-  private searchableFields(): string[] {
-    return this.resolvedSettings.searchableAttributes ?? [...this.fieldOrder];
-  }
-
-  updateSettings(patch: JsonObject): void {
-    this.settingsObject = applySettingsPatch(this.settingsObject, patch);
-    this.resolvedSettings = resolveSettings(this.settingsObject);
-    // The typo-disabled attributes live inside the text index, so any settings change rebuilds it
-    // lazily through text(); dropping it here keeps that rule in one place.
-    this.textIndex = null;
-    this.text();
-    this.touch();
-  }
-
-  resetSettings(): void {
-    this.updateSettings(defaultSettings());
-  }
-
-  setPrimaryKey(primaryKey: string): void {
-    if (this.primaryKey !== null && this.primaryKey !== primaryKey && this.records.size > 0) {
-      throw primaryKeyAlreadyExists(this.uid, this.primaryKey);
+  /** Adds documents, replacing (POST) or merging into (PUT) those with the same primary key. */
+  async addDocuments(docs: Doc[], primaryKey: string | undefined, merge: boolean): Promise<number> {
+    if (!this.primaryKey) {
+      const guess = primaryKey ?? Object.keys(docs[0] ?? {}).find((k) => /id$/i.test(k));
+      if (!guess) throw badRequest('index_primary_key_no_candidate_found', 'The primary key inference failed: no field ends in `id`.');
+      this.primaryKey = guess;
     }
-    this.primaryKey = primaryKey;
-    this.touch();
-  }
-
-  /** Applies one document addition task; throws (and changes nothing) if any document is invalid. */
-  writeDocuments(documents: JsonObject[], mode: WriteMode, requestedPrimaryKey: string | null): number {
-    let primaryKey = this.primaryKey;
-    if (requestedPrimaryKey !== null) {
-      if (primaryKey !== null && primaryKey !== requestedPrimaryKey) throw primaryKeyAlreadyExists(this.uid, primaryKey);
-      primaryKey = requestedPrimaryKey;
-    }
-    if (documents.length === 0) return 0;
-    primaryKey ??= inferPrimaryKey(this.uid, documents[0] as JsonObject);
-
-    // Validate every id first so a bad document fails the whole task, as in Meilisearch.
-    const incoming = new Map<string, JsonObject>();
-    for (const doc of documents) {
-      const id = documentIdOf(this.uid, primaryKey, doc);
-      const earlier = incoming.get(id);
-      incoming.set(id, mode === 'update' && earlier ? { ...earlier, ...doc } : doc);
-    }
-    this.primaryKey = primaryKey;
-
-    const fieldsBefore = this.fieldOrder.length;
-    const changed: DocumentRecord[] = [];
-    for (const [id, doc] of incoming) {
-      this.noteFields(doc);
-      const existing = this.records.get(id);
-      if (existing) {
-        this.textIndex?.discard(existing.seq);
-        existing.doc = mode === 'update' ? { ...existing.doc, ...doc } : doc;
-        existing.facts = null;
-        changed.push(existing);
-      } else {
-        const record: DocumentRecord = { seq: this.nextSeq++, id, doc, facts: null };
-        this.records.set(id, record);
-        this.bySeq.set(record.seq, record);
-        changed.push(record);
+    const pk = this.primaryKey;
+    const bad = docs.find((d) => !(typeof d[pk] === 'string' && /^[\w-]{1,511}$/.test(d[pk])) && !Number.isInteger(d[pk]));
+    if (bad) throw badRequest('invalid_document_id', `Document identifier \`${JSON.stringify(bad[pk])}\` is invalid or missing.`);
+    const text = this.textIndex();
+    for (let i = 0; i < docs.length; i += SLICE) {
+      if (i > 0) await nextTurn();
+      for (const doc of docs.slice(i, i + SLICE)) {
+        const id = String(doc[pk]);
+        const old = this.docs.get(id);
+        const next = merge && old ? { ...old, ...doc } : doc;
+        this.docs.set(id, next);
+        text.set(id, next);
       }
     }
-    for (const record of changed) this.fieldStore.written(record);
-    const searchableChanged = this.resolvedSettings.searchableAttributes === null && this.fieldOrder.length !== fieldsBefore;
-    if (this.textIndex && !searchableChanged) this.textIndex.addAll(changed);
-    else this.text();
-    this.compactTextIfStale();
-    this.touch();
-    return incoming.size;
+    if (this.settings.searchableAttributes.includes('*')) this.text = null;
+    this.updatedAt = new Date().toISOString();
+    return docs.length;
   }
 
-  /** Rewritten and deleted documents leave stale postings; rebuild once they dominate. */
-  private compactTextIfStale(): void {
-    if (this.textIndex && this.textIndex.slotCount > 2 * this.records.size + STALE_SLOT_ALLOWANCE) {
-      this.textIndex = null;
-      this.text();
-    }
-  }
-
-  private noteFields(doc: JsonObject): void {
-    for (const key of Object.keys(doc)) {
-      if (!this.knownFields.has(key)) {
-        this.knownFields.add(key);
-        this.fieldOrder.push(key);
-      }
-    }
-  }
-
-  deleteDocuments(ids: Iterable<string>): number {
+  deleteDocuments(ids: unknown[]): number {
     let deleted = 0;
-    for (const id of ids) {
-      const record = this.records.get(id);
-      if (!record) continue;
-      this.records.delete(id);
-      this.bySeq.delete(record.seq);
-      this.textIndex?.discard(record.seq);
-      this.fieldStore.deleted(record.seq);
+    for (const raw of ids) {
+      const id = String(raw);
+      if (!this.docs.delete(id)) continue;
+      this.text?.remove(id);
       deleted++;
     }
-    if (deleted > 0) {
-      this.compactTextIfStale();
-      this.touch();
-    }
+    this.updatedAt = new Date().toISOString();
     return deleted;
-  }
-
-  deleteMatching(predicate: DocumentPredicate): number {
-    const ids: string[] = [];
-    for (const record of this.records.values()) if (predicate(record)) ids.push(record.id);
-    return this.deleteDocuments(ids);
   }
 
   deleteAll(): number {
-    const deleted = this.records.size;
-    this.records.clear();
-    this.bySeq.clear();
-    this.textIndex = null;
-    this.fieldStore.clear();
-    this.touch();
-    return deleted;
+    const n = this.docs.size;
+    this.docs.clear();
+    this.text = null;
+    this.updatedAt = new Date().toISOString();
+    return n;
   }
 
-  /** How many documents hold each top-level field, for the stats route. */
-  fieldDistribution(): Record<string, number> {
-    const counts: Record<string, number> = {};
-    for (const record of this.records.values()) {
-      for (const key of Object.keys(record.doc)) counts[key] = (counts[key] ?? 0) + 1;
+  /** Meilisearch's ranking rules in order; `proximity` is not modelled; `attr:asc|desc` sorts by a field. */
+  private comparator(sort: string[] | undefined): Compare {
+    const sortable = new Set(this.settings.sortableAttributes);
+    const byField = (spec: string, code: string): Compare => {
+      const m = /^([A-Za-z0-9_.-]+):(asc|desc)$/.exec(spec);
+      if (!m || (code === 'invalid_search_sort' && !sortable.has(m[1]!))) {
+        throw badRequest(
+          code,
+          `\`${spec}\` is not a sortable \`attribute:asc\` or \`attribute:desc\`. Sortable: \`${[...sortable].join(', ')}\`.`,
+        );
+      }
+      const [field, dir] = [m[1]!, m[2] === 'desc' ? -1 : 1];
+      return (a, b) => dir * compareValues(a.doc[field], b.doc[field]);
+    };
+    const sorts = (sort ?? []).map((s) => byField(s, 'invalid_search_sort'));
+    const rules: Compare[] = this.settings.rankingRules.flatMap((rule): Compare[] => {
+      if (rule === 'words') return [(a, b) => b.words - a.words];
+      if (rule === 'typo') return [(a, b) => a.typos - b.typos];
+      if (rule === 'attribute') return [(a, b) => a.attribute - b.attribute];
+      if (rule === 'exactness') return [(a, b) => b.score - a.score];
+      if (rule === 'sort') return sorts;
+      if (rule === 'proximity') return [];
+      return [byField(rule, 'invalid_settings_ranking_rules')];
+    });
+    if (!this.settings.rankingRules.includes('sort')) rules.push(...sorts);
+    return (a, b) => {
+      for (const rule of rules) {
+        const c = rule(a, b);
+        if (c !== 0) return c;
+      }
+      return 0;
+    };
+  }
+
+  search(body: SearchBody): Record<string, unknown> {
+    const started = performance.now();
+    const limit = body.limit ?? 20;
+    const offset = body.offset ?? 0;
+    if (!Number.isInteger(limit) || limit < 0 || !Number.isInteger(offset) || offset < 0) {
+      throw badRequest('invalid_search_limit', '`limit` and `offset` must be non-negative integers.');
     }
-    return counts;
+    const filterable = new Set(this.settings.filterableAttributes);
+    const filter: Predicate | null = compileFilter(body.filter, filterable);
+    const facets = body.facets ?? [];
+    const unknownFacet = facets.find((f) => !filterable.has(f));
+    if (unknownFacet)
+      throw badRequest('invalid_search_facets', `Attribute \`${unknownFacet}\` is not filterable, so it cannot be a facet.`);
+    const compare = this.comparator(body.sort);
+
+    const q = body.q ?? '';
+    const words = queryWords(q);
+    const matches = words.length
+      ? this.textIndex().search(words, filter, body.matchingStrategy === 'all' ? 0 : offset + limit)
+      : this.placeholder(filter);
+    matches.sort(compare);
+
+    const response: Record<string, unknown> = {
+      hits: matches.slice(offset, offset + limit).map((m) => m.doc),
+      query: q,
+      processingTimeMs: 0,
+      limit,
+      offset,
+      estimatedTotalHits: matches.length,
+    };
+    if (body.facets) Object.assign(response, this.facets(matches, facets));
+    response.processingTimeMs = Math.round(performance.now() - started);
+    return response;
   }
-}
 
-function sameList(left: readonly string[], right: readonly string[]): boolean {
-  return left.length === right.length && left.every((value, i) => value === right[i]);
-}
+  /** A search without words: every document the filter lets through. */
+  private placeholder(filter: Predicate | null): TextMatch[] {
+    const matches: TextMatch[] = [];
+    for (const [id, doc] of this.docs) if (!filter || filter(doc)) matches.push({ id, doc, words: 0, typos: 0, attribute: 0, score: 0 });
+    return matches;
+  }
 
-function primaryKeyAlreadyExists(indexUid: string, primaryKey: string): MeiliError {
-  return new MeiliError(
-    400,
-    'index_primary_key_already_exists',
-    `Index \`${indexUid}\`: Index already has a primary key: \`${primaryKey}\`.`,
-  );
+  /** Value counts of each facet over every match, and the minimum and maximum of numeric ones. */
+  private facets(matches: TextMatch[], facets: string[]): Record<string, unknown> {
+    const facetDistribution: Record<string, Record<string, number>> = {};
+    const facetStats: Record<string, { min: number; max: number }> = {};
+    for (const facet of facets) {
+      const counts: Record<string, number> = (facetDistribution[facet] = {});
+      const count = (v: unknown): void => {
+        if (v === undefined || v === null || typeof v === 'object') return;
+        counts[String(v)] = (counts[String(v)] ?? 0) + 1;
+        if (typeof v !== 'number') return;
+        const s = (facetStats[facet] ??= { min: v, max: v });
+        [s.min, s.max] = [Math.min(s.min, v), Math.max(s.max, v)];
+      };
+      for (const { doc } of matches) {
+        const raw = doc[facet];
+        if (Array.isArray(raw)) raw.forEach(count);
+        else count(raw);
+      }
+    }
+    return { facetDistribution, facetStats };
+  }
 }

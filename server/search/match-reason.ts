@@ -1,23 +1,7 @@
+import typoDistance from 'damerau-levenshtein';
 import { normalizePartNumber } from '../../shared/part-number';
 import type { MatchedBy } from '../../shared/schemas/search';
 import type { PartDocument } from './part-document';
-
-/** Optimal-string-alignment distance: a swap of two neighbours is one typo, as a person counts it. */
-export function typoDistance(a: string, b: string, max = 2): number {
-  if (Math.abs(a.length - b.length) > max) return max + 1;
-  const d: number[][] = Array.from({ length: a.length + 1 }, (_, i) =>
-    Array.from({ length: b.length + 1 }, (_, j) => (i === 0 ? j : j === 0 ? i : 0)),
-  );
-  for (let i = 1; i <= a.length; i++) {
-    for (let j = 1; j <= b.length; j++) {
-      const cost = a[i - 1] === b[j - 1] ? 0 : 1;
-      let v = Math.min(d[i - 1]![j]! + 1, d[i]![j - 1]! + 1, d[i - 1]![j - 1]! + cost);
-      if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1]) v = Math.min(v, d[i - 2]![j - 2]! + 1);
-      d[i]![j] = v;
-    }
-  }
-  return d[a.length]![b.length]!;
-}
 
 export interface MatchReason {
   matchedBy: MatchedBy;
@@ -25,9 +9,9 @@ export interface MatchReason {
 }
 
 /**
- * Why a hit came back: the number the clerk typed (or the closest within a typo or two) found
- * among ours, the interchange numbers and the superseded ones — in that order — else a vehicle or
- * free-text match.
+ * Why a hit came back: the number the clerk typed (or the closest within a typo or two, a swap of
+ * neighbours counting as one) found among ours, the interchange numbers and the superseded ones — in
+ * that order — else a vehicle or free-text match.
  */
 export function matchReason(doc: PartDocument, rawQuery: string): MatchReason {
   const q = normalizePartNumber(rawQuery);
@@ -40,7 +24,7 @@ export function matchReason(doc: PartDocument, rawQuery: string): MatchReason {
     ];
     for (const exact of [true, false]) {
       for (const [by, numbers] of groups) {
-        const hit = numbers.find((n) => (exact ? n === q : typoDistance(n, q) <= (q.length >= 9 ? 2 : 1)));
+        const hit = numbers.find((n) => (exact ? n === q : typoDistance(n, q).steps <= (q.length >= 9 ? 2 : 1)));
         if (hit) return { matchedBy: by, matchedNumber: hit };
       }
     }

@@ -22,6 +22,8 @@ export interface PartDocument {
   hasSpec: boolean;
   onHand: number;
   inStock: boolean;
+  /** For ranking among equal matches: 2 for a spec, 1 for stock on hand. */
+  rankBoost: number;
   architecture: string | null;
   driver: string | null;
   connectorPins: number | null;
@@ -171,6 +173,7 @@ function toDocument(r: DocumentRow): PartDocument {
     hasSpec: r.has_spec,
     onHand: r.on_hand,
     inStock: r.on_hand > 0,
+    rankBoost: (r.has_spec ? 2 : 0) + (r.on_hand > 0 ? 1 : 0),
     architecture: r.architecture,
     driver: r.driver,
     connectorPins: r.connector_pins,

@@ -68,8 +68,8 @@ export async function searchParts(
     if (exact.length) return { hits: await withInterchangeChecks(ds, exact, settings, query.engineId), total: exact.length, facets: {} };
   }
   const base = { filter: buildFilters(query), facets: facetsFor(query, numberLike), limit: query.limit, offset: query.offset };
-  let res = await index.index.search(numberLike ? normalizePartNumber(raw) : raw, base);
-  if (res.hits.length === 0 && numberLike) res = await index.index.search(raw, base);
+  let res = await index.search(numberLike ? normalizePartNumber(raw) : raw, base);
+  if (res.hits.length === 0 && numberLike) res = await index.search(raw, base);
   return {
     hits: await withInterchangeChecks(
       ds,

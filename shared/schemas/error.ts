@@ -12,6 +12,7 @@ export const ERROR_CODES = [
   'payload_too_large',
   'unsupported_file',
   'unavailable',
+  'search_unavailable',
   'internal',
 ] as const;
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -32,7 +32,7 @@ export class OwnSearchApp {
 
   /** Back on the same address, with the index set up again but empty, as a service that lost its data. */
   async restartSearch(): Promise<void> {
-    this.standin = await startSearchStandin({ port: this.standin.port });
+    this.standin = await startSearchStandin({ port: Number(new URL(this.standin.url).port) });
     this.running = true;
     await this.t.deps.search.configure();
   }
