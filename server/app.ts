@@ -9,11 +9,14 @@ import { csrfErrorToAppError, csrfProtection } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { configurePassport } from './middleware/passport';
 import { sessionMiddleware } from './middleware/session';
+import { requestLog } from './observability/request-log';
+import { requestMetrics } from './observability/request-metrics';
 import { authRoutes } from './routes/auth.routes';
 import { catalogRoutes } from './routes/catalog.routes';
 import { compatRoutes } from './routes/compat.routes';
 import { fitReportRoutes } from './routes/fit-reports.routes';
 import { jobsRoutes } from './routes/jobs.routes';
+import { metricsRoutes, probeRoutes } from './routes/ops.routes';
 import { settingsRoutes } from './routes/settings.routes';
 import { priceListRoutes } from './routes/price-lists.routes';
 import { supplierRoutes } from './routes/suppliers.routes';
@@ -39,6 +42,8 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   if (deps.env.TRUST_PROXY) app.set('trust proxy', 1);
+  // First, so every response carries its X-Request-Id and every request is timed.
+  app.use(requestLog(deps.logger), requestMetrics(deps.metrics));
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -54,11 +59,13 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
   );
+  app.use(probeRoutes(deps));
   app.use('/api', express.json({ limit: '2mb' }));
   app.use(cookieParser());
   app.use(sessionMiddleware(deps));
   const passport = configurePassport(deps.dataSource);
   app.use(passport.session());
+  app.use(metricsRoutes(deps));
 
   const csrf = csrfProtection(deps.env);
   app.use('/api', csrf.doubleCsrfProtection, csrfErrorToAppError);
