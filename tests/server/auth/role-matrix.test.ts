@@ -4,27 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ROLES, type Role } from '../../../shared/roles';
 import { ROUTE_ACCESS, type Access, type RouteKey } from '../../../server/routes/route-access';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
+import { mountedRoutes } from '../../helpers/mounted-routes';
 import { createTestApp, csrfAgent, signIn, type Agent, type TestApp } from '../../helpers/test-app';
-
-interface Layer {
-  route?: { path: string; methods: Record<string, boolean> };
-  handle?: { stack?: Layer[] };
-}
-
-/** Every route the app actually mounts, read from Express's own router. */
-function mountedRoutes(router: Router): string[] {
-  const out: string[] = [];
-  const walk = (stack: Layer[]) => {
-    for (const layer of stack) {
-      if (layer.route) {
-        for (const [m, on] of Object.entries(layer.route.methods))
-          if (on && m !== '_all') out.push(`${m.toUpperCase()} ${layer.route.path}`);
-      } else if (layer.handle?.stack) walk(layer.handle.stack);
-    }
-  };
-  walk((router as unknown as { stack: Layer[] }).stack);
-  return out;
-}
 
 function expected(access: Access, who: Role | 'anonymous'): 'allowed' | 401 | 403 {
   if (access === 'public') return 'allowed';
