@@ -49,17 +49,19 @@ export function drainable(server: Server): Drainable {
 }
 
 /**
- * Runs `stop` once on SIGTERM or SIGINT, then exits 0; a second signal, or a stop that hangs past
- * `hardLimitMs`, exits 1 at once.
+ * Runs `stop` once on SIGTERM or SIGINT, then exits 0. Ctrl-C pressed a second time, or a stop that
+ * hangs past `hardLimitMs`, exits 1 at once; a SIGTERM during the stop changes nothing (`npm start`
+ * sends one after the terminal's SIGINT).
  */
 export function onStopSignals(logger: Logger, hardLimitMs: number, stop: (signal: string) => Promise<void>): void {
-  let stopping = false;
+  let first: NodeJS.Signals | null = null;
   const handle = (signal: NodeJS.Signals): void => {
-    if (stopping) {
-      logger.warn({ signal }, 'second stop signal: exiting now');
+    if (first) {
+      if (signal !== 'SIGINT' || first !== 'SIGINT') return;
+      logger.warn({ signal }, 'second Ctrl-C: exiting now');
       process.exit(1);
     }
-    stopping = true;
+    first = signal;
     logger.info({ signal }, 'stopping: draining requests and jobs');
     setTimeout(() => {
       logger.error({ hardLimitMs }, 'stop took too long: exiting');

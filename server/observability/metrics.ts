@@ -53,6 +53,23 @@ export function createMetrics(sources: MetricSources): Metrics {
     registers: [registry],
   });
 
+  const poolGauge = (name: string, help: string, read: (p: pg.Pool) => number): void => {
+    new Gauge({
+      name,
+      help,
+      labelNames: ['pool'],
+      registers: [registry],
+      collect() {
+        this.reset();
+        for (const [pool, p] of pools(sources)) this.set({ pool }, read(p));
+      },
+    });
+  };
+  poolGauge('arcwise_db_pool_connections', 'Open connections of a pg pool', (p) => p.totalCount);
+  poolGauge('arcwise_db_pool_idle', 'Idle connections of a pg pool', (p) => p.idleCount);
+  poolGauge('arcwise_db_pool_waiting', 'Queries waiting for a connection of a pg pool', (p) => p.waitingCount);
+
+  // After the pool gauges: a scrape reads the pools before its own query takes a connection.
   new Gauge({
     name: 'arcwise_job_queue_jobs',
     help: 'Follow-up jobs in the queue, by queue and state (created, retry, active, failed)',
@@ -70,22 +87,6 @@ export function createMetrics(sources: MetricSources): Metrics {
       }
     },
   });
-
-  const poolGauge = (name: string, help: string, read: (p: pg.Pool) => number): void => {
-    new Gauge({
-      name,
-      help,
-      labelNames: ['pool'],
-      registers: [registry],
-      collect() {
-        this.reset();
-        for (const [pool, p] of pools(sources)) this.set({ pool }, read(p));
-      },
-    });
-  };
-  poolGauge('arcwise_db_pool_connections', 'Open connections of a pg pool', (p) => p.totalCount);
-  poolGauge('arcwise_db_pool_idle', 'Idle connections of a pg pool', (p) => p.idleCount);
-  poolGauge('arcwise_db_pool_waiting', 'Queries waiting for a connection of a pg pool', (p) => p.waitingCount);
 
   return {
     registry,

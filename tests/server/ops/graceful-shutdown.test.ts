@@ -128,4 +128,16 @@ describe('SIGTERM to an app server', () => {
       await server.ensureGone();
     }
   }, 60_000);
+
+  it('stops the same way on Ctrl-C followed by the TERM that npm start sends after it', async () => {
+    const server = await startChildServer('index', { LOG_LEVEL: 'info' });
+    try {
+      server.signal('SIGINT');
+      server.signal('SIGTERM');
+      expect(await server.exited).toEqual({ code: 0, signal: null });
+      expect(server.output()).toContain('"msg":"stopped"');
+    } finally {
+      await server.ensureGone();
+    }
+  }, 60_000);
 });
