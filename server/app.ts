@@ -13,11 +13,14 @@ import { sessionMiddleware } from './middleware/session';
 import { docsPage, openApiRoutes } from './openapi/docs.routes';
 import { checkResponses } from './openapi/response-check';
 import { apiKeyRoutes } from './routes/api-keys.routes';
+import { requestLog } from './observability/request-log';
+import { requestMetrics } from './observability/request-metrics';
 import { authRoutes } from './routes/auth.routes';
 import { catalogRoutes } from './routes/catalog.routes';
 import { compatRoutes } from './routes/compat.routes';
 import { fitReportRoutes } from './routes/fit-reports.routes';
 import { jobsRoutes } from './routes/jobs.routes';
+import { metricsRoutes, probeRoutes } from './routes/ops.routes';
 import { settingsRoutes } from './routes/settings.routes';
 import { priceListRoutes } from './routes/price-lists.routes';
 import { supplierRoutes } from './routes/suppliers.routes';
@@ -45,6 +48,8 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   if (deps.env.TRUST_PROXY) app.set('trust proxy', 1);
+  // First, so every response carries its X-Request-Id and every request is timed.
+  app.use(requestLog(deps.logger), requestMetrics(deps.metrics));
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -60,6 +65,7 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
   );
+  app.use(probeRoutes(deps));
   // In the API tests every answer is held against the OpenAPI document.
   if (deps.env.NODE_ENV === 'test') app.use('/api', checkResponses());
   app.use('/api', express.json({ limit: '2mb' }));
@@ -69,6 +75,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(forPeople(sessionMiddleware(deps)));
   const passport = configurePassport(deps.dataSource);
   app.use(forPeople(passport.session()));
+  app.use(metricsRoutes(deps));
 
   const csrf = csrfProtection(deps.env);
   app.use('/api', csrf.doubleCsrfProtection, csrfErrorToAppError);

@@ -32,6 +32,14 @@ const envSchema = z.object({
   JOB_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).default(10),
   /** How often an idle worker looks for due jobs (retries); new jobs wake it at once. pg-boss's floor is 0.5. */
   JOB_POLL_SECONDS: z.coerce.number().min(0.5).default(2),
+  /** pino's level; unset: info, or warn under NODE_ENV=test so test output stays clean. */
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+  /** On SIGTERM, /readyz answers 503 this long before the listener closes, so a load balancer stops sending first. */
+  SHUTDOWN_DELAY_SECONDS: z.coerce.number().min(0).default(0),
+  /** Requests under way get this long to finish after the listener closes; the rest are cut. */
+  SHUTDOWN_TIMEOUT_SECONDS: z.coerce.number().min(0).default(20),
+  /** `npm run worker`: the port of its /healthz, /readyz and /metrics. */
+  WORKER_PORT: z.coerce.number().int().min(0).max(65535).default(3100),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -2,7 +2,7 @@ import type { z } from 'zod';
 import type { AppDeps } from '../deps';
 
 /** What a job's handler may use: the app's services, not the queue that runs it. */
-export type JobDeps = Pick<AppDeps, 'env' | 'dataSource' | 'search' | 'mailer'>;
+export type JobDeps = Pick<AppDeps, 'env' | 'dataSource' | 'search' | 'mailer' | 'logger'>;
 
 export interface JobDefinition<S extends z.ZodType = z.ZodType> {
   /** The payload, checked when it is enqueued and again when a worker reads it back. */

@@ -1,7 +1,9 @@
+import pg from 'pg';
 import PgBoss from 'pg-boss';
 import type { EntityManager } from 'typeorm';
 import { JOB_NAMES, type JobName } from '../../shared/schemas/jobs';
 import { JOBS, type JobPayload } from './index';
+import type { Logger } from '../observability/logger';
 import type { JobDefinition, JobDeps } from './job';
 import { listenForNewJobs, WAKE_CHANNEL, type JobWakeListener } from './wake';
 
@@ -10,7 +12,14 @@ export const JOB_SCHEMA = 'pgboss';
 /** A job out of attempts stays in the job table (listed on the Jobs page, retryable) this long. */
 const KEEP_FAILED_SECONDS = 30 * 24 * 3600;
 
-const logError = (err: Error): void => console.error('[arcwise] job queue:', err.message);
+/**
+ * pg-boss's own errors (a lost connection, a failed maintenance run): it carries on, so they are
+ * logged — by message, as pg's errors carry the whole client object along.
+ */
+const logTo =
+  (logger: Pick<Logger, 'error'>) =>
+  (err: Error): void =>
+    logger.error({ error: err.message }, 'job queue error');
 
 function bossOptions(databaseUrl: string, supervise: boolean): PgBoss.ConstructorOptions {
   return {
@@ -33,7 +42,7 @@ async function createQueues(boss: PgBoss): Promise<void> {
 /** Creates (or migrates) the queue's schema and queues ahead of several processes starting at once. */
 export async function installJobQueue(databaseUrl: string): Promise<void> {
   const boss = new PgBoss(bossOptions(databaseUrl, false));
-  boss.on('error', logError);
+  boss.on('error', (err) => console.error('[arcwise] job queue:', err.message));
   await boss.start();
   await createQueues(boss);
   await boss.stop({ graceful: false });
@@ -52,7 +61,13 @@ export class JobQueue {
 
   constructor(private readonly deps: JobDeps) {
     this.boss = new PgBoss(bossOptions(deps.env.DATABASE_URL, deps.env.JOB_WORKERS));
-    this.boss.on('error', logError);
+    this.boss.on('error', logTo(deps.logger));
+  }
+
+  /** pg-boss's connection pool, for the metrics; null before start and after stop. */
+  pool(): pg.Pool | null {
+    const pool: unknown = Reflect.get(this.boss.getDb(), 'pool');
+    return pool instanceof pg.Pool && !pool.ending ? pool : null;
   }
 
   async start(): Promise<void> {
@@ -96,7 +111,7 @@ export class JobQueue {
       );
       this.workerIds.set(name, id);
     }
-    this.wake = await listenForNewJobs(this.deps.env.DATABASE_URL, (name) => {
+    this.wake = await listenForNewJobs(this.deps.env.DATABASE_URL, this.deps.logger, (name) => {
       const id = this.workerIds.get(name);
       if (id) this.boss.notifyWorker(id);
     });
@@ -113,7 +128,10 @@ export class JobQueue {
       const message = err instanceof Error ? err.message : String(err);
       for (const j of jobs) {
         const next = j.retryCount < j.retryLimit ? 'will retry' : 'out of attempts, kept on the Jobs page';
-        console.error(`[arcwise] job ${name} ${j.id} failed (attempt ${j.retryCount + 1} of ${j.retryLimit + 1}, ${next}): ${message}`);
+        this.deps.logger.error(
+          { job: name, jobId: j.id, attempt: j.retryCount + 1, attempts: j.retryLimit + 1, next, error: message },
+          `job ${name} failed (${next})`,
+        );
       }
       throw err;
     }

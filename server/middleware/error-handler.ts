@@ -66,6 +66,7 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     res.status(status).json(bodyOf('bad_request', message));
     return;
   }
-  console.error(`[arcwise] ${req.method} ${req.originalUrl} failed:`, err);
+  // The request's own logger: the line carries the request id the client got in X-Request-Id.
+  req.log.error({ err }, 'request failed with an unexpected error');
   res.status(500).json(bodyOf('internal', 'Something went wrong on our side; it has been logged.'));
 };

@@ -39,3 +39,18 @@ export async function findProblemJob(ds: DataSource, id: string): Promise<JobRow
   const rows: unknown = await ds.query(`${SELECT} WHERE id = $1 AND state IN ('retry', 'failed') AND name = ANY($2)`, [id, JOB_NAMES]);
   return z.array(jobRowSchema).parse(rows)[0] ?? null;
 }
+
+/** The states a queue's depth is told in: waiting, waiting to retry, running, out of attempts. */
+export const QUEUE_DEPTH_STATES = ['created', 'retry', 'active', 'failed'] as const;
+const depthRowSchema = z.object({ name: jobNameSchema, state: z.enum(QUEUE_DEPTH_STATES), jobs: z.number().int() });
+export type QueueDepthRow = z.infer<typeof depthRowSchema>;
+
+/** Jobs per queue and state, for the metrics (completed jobs are not depth, and are many). */
+export async function countQueuedJobs(ds: DataSource): Promise<QueueDepthRow[]> {
+  const rows: unknown = await ds.query(
+    `SELECT name, state::text AS state, count(*)::int AS jobs FROM ${JOB_SCHEMA}.job
+      WHERE name = ANY($1) AND state::text = ANY($2) GROUP BY name, state`,
+    [JOB_NAMES, QUEUE_DEPTH_STATES],
+  );
+  return z.array(depthRowSchema).parse(rows);
+}

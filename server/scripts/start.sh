@@ -37,6 +37,7 @@ fi
 
 export STATIC_DIR="$ROOT/dist"
 log "serving Arcwise on http://localhost:${PORT:-3000} (Ctrl-C stops it)"
-npx tsx server/index.ts &
+# node itself, not an npx wrapper: the TERM sent on stop must reach the server so that it drains.
+node --import tsx server/index.ts &
 SERVER_PID=$!
 wait "$SERVER_PID"

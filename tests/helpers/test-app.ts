@@ -1,11 +1,11 @@
 import 'reflect-metadata';
 import type { Express } from 'express';
 import request from 'supertest';
-import { inject } from 'vitest';
 import { createApp } from '../../server/app';
 import { buildDeps, closeDeps } from '../../server/bootstrap';
 import { loadEnv, type Env } from '../../server/config/env';
 import type { AppDeps } from '../../server/deps';
+import { testServicesEnv } from './services-env';
 
 export interface TestApp {
   app: Express;
@@ -19,21 +19,7 @@ export interface TestApp {
  * (the policy's backoff from a shorter first delay) so a test can watch one happen.
  */
 export async function createTestApp(overrides: Partial<Record<keyof Env, string>> = {}): Promise<TestApp> {
-  const env = loadEnv({
-    ...process.env,
-    NODE_ENV: 'test',
-    DATABASE_URL: inject('databaseUrl'),
-    SMTP_URL: inject('smtpUrl'),
-    MAIL_CATCHER_URL: inject('mailCatcherUrl'),
-    MEILI_HOST: inject('meiliHost'),
-    MEILI_API_KEY: inject('meiliApiKey'),
-    MEILI_INDEX: 'parts',
-    APP_URL: 'http://localhost:3999',
-    SESSION_SECRET: 'arcwise-test-secret-0123456789',
-    JOB_RETRY_DELAY_SECONDS: '1',
-    JOB_POLL_SECONDS: '0.5',
-    ...overrides,
-  });
+  const env = loadEnv({ ...process.env, ...testServicesEnv(), ...overrides });
   const deps = await buildDeps(env);
   if (env.JOB_WORKERS) await deps.jobs.startWorkers();
   return { app: createApp(deps), deps, close: () => closeDeps(deps) };

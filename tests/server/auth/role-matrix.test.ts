@@ -4,8 +4,8 @@ import { ROLES, type Role } from '../../../shared/roles';
 import { API_KEY_SCOPES, scopeCovers, type ApiKeyScope } from '../../../shared/schemas/api-keys';
 import { keyScopeOf, peopleAccess, ROUTE_ACCESS, type Access, type RouteKey, type RouteRule } from '../../../server/routes/route-access';
 import { createApiKey, revokeApiKey } from '../../../server/services/api-keys.service';
-import { mountedRoutes } from '../../helpers/api-routes';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
+import { mountedRoutes } from '../../helpers/mounted-routes';
 import { createTestApp, csrfAgent, signIn, type Agent, type TestApp } from '../../helpers/test-app';
 
 function expected(access: Access, who: Role | 'anonymous'): 'allowed' | 401 | 403 {

@@ -5,9 +5,7 @@ import type { SearchResponse } from '../../../shared/schemas/search';
 import { onlyJob, queuedJobs, waitForJobState } from '../../helpers/jobs';
 import { OwnSearchApp } from '../../helpers/own-search';
 import type { Agent, TestApp } from '../../helpers/test-app';
-
-/** Letters only, so the search takes it for words (the index), not a number (PostgreSQL's exact lookup). */
-const inventedWord = () => `quenchwick${[...randomBytes(6)].map((b) => String.fromCharCode(97 + (b % 26))).join('')}`;
+import { inventedWord } from '../../helpers/words';
 
 describe('a catalog edit while the search service is down', () => {
   let own: OwnSearchApp;

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { errorStatuses, openApiPath } from '../../../server/openapi/document';
 import { ROUTE_ACCESS, type RouteKey } from '../../../server/routes/route-access';
 import { SINGLE_LINE_PATTERN } from '../../../shared/schemas/text';
-import { mountedRoutes } from '../../helpers/api-routes';
+import { mountedRoutes } from '../../helpers/mounted-routes';
 import { textInputs, type OpenApiDoc } from '../../helpers/openapi-inputs';
 import { createTestApp, csrfAgent, type TestApp } from '../../helpers/test-app';
 

@@ -1,12 +1,14 @@
 import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { PriceList } from '../../../shared/schemas/price-lists';
 import type { Supplier } from '../../../shared/schemas/suppliers';
+import { backends, waitForBackendsGone } from '../../helpers/backends';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { newSupplier, post, stage, type Signed } from '../../helpers/price-list-api';
 import { isFullyCommitted, isUntouched, listState } from '../../helpers/price-list-checks';
 import { bulkCsv, bulkRows, runTag, seededRandom } from '../../helpers/price-list-files';
+import { testServicesEnv } from '../../helpers/services-env';
 import { createTestApp, signIn, type TestApp } from '../../helpers/test-app';
 
 const ROWS = 20_000;
@@ -35,16 +37,8 @@ function startChild(email: string, appName: string): Child {
     stdio: ['pipe', 'pipe', 'pipe'],
     env: {
       ...process.env,
-      NODE_ENV: 'test',
+      ...testServicesEnv(),
       TSX_TSCONFIG_PATH: `${ROOT}/tsconfig.json`,
-      DATABASE_URL: inject('databaseUrl'),
-      SMTP_URL: inject('smtpUrl'),
-      MAIL_CATCHER_URL: inject('mailCatcherUrl'),
-      MEILI_HOST: inject('meiliHost'),
-      MEILI_API_KEY: inject('meiliApiKey'),
-      MEILI_INDEX: 'parts',
-      APP_URL: 'http://localhost:3999',
-      SESSION_SECRET: 'arcwise-test-secret-0123456789',
       // node-postgres names its connections after this, so the test can see them go.
       PGAPPNAME: appName,
       CRASH_EMAIL: email,
@@ -97,24 +91,6 @@ describe('a server killed during a commit', () => {
   });
   afterAll(() => t.close());
 
-  async function backends(appName: string): Promise<number> {
-    const rows = (await t.deps.dataSource.query(`SELECT count(*)::int AS n FROM pg_stat_activity WHERE application_name = $1`, [
-      appName,
-    ])) as {
-      n: number;
-    }[];
-    return rows[0]?.n ?? 0;
-  }
-
-  /** PostgreSQL ends a dead client's transaction only when it next talks to it: wait for that. */
-  async function waitForBackendsGone(appName: string): Promise<void> {
-    const deadline = Date.now() + 30_000;
-    while ((await backends(appName)) > 0) {
-      if (Date.now() > deadline) throw new Error(`connections of ${appName} still open`);
-      await sleep(25);
-    }
-  }
-
   it(`leaves each of ${KILLS} lists of ${ROWS.toLocaleString('en-US')} rows either committed whole or not at all`, async () => {
     const ds = t.deps.dataSource;
     const tag = runTag();
@@ -140,7 +116,7 @@ describe('a server killed during a commit', () => {
       if (i + 1 < KILLS) next = startChild(email, `arcwise-crash-${tag}-${i + 1}`);
       await child.commit(current.id);
       const sentAt = performance.now();
-      if ((await backends(child.appName)) > 0) outcomes.connectionsSeen++;
+      if ((await backends(t.deps.dataSource, child.appName)) > 0) outcomes.connectionsSeen++;
       let answeredAfter: number | null = null;
       let answeredStatus: number | null = null;
       child.answered.then(
@@ -152,7 +128,7 @@ describe('a server killed during a commit', () => {
       );
       await sleep(random() * commitMs);
       await child.kill();
-      await waitForBackendsGone(child.appName);
+      await waitForBackendsGone(t.deps.dataSource, child.appName);
       // The window follows the commit's length: a commit that finished before the kill tells it;
       // a kill that came first widens the window a little, so later kills reach the end too.
       commitMs = answeredAfter ?? commitMs * 1.1;
