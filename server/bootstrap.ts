@@ -34,4 +34,5 @@ export async function closeDeps(deps: AppDeps): Promise<void> {
   deps.mailer.close();
   await deps.pool.end();
   await deps.dataSource.destroy();
+  deps.logger.flush();
 }

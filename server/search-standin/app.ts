@@ -1,5 +1,5 @@
 /** The stand-in's HTTP routes: the part of Meilisearch's API the `meilisearch` SDK calls for the app. */
-import express, { type ErrorRequestHandler, type Express, type Request, type RequestHandler, type Response } from 'express';
+import express, { type ErrorRequestHandler, type Express, type RequestHandler, type Response } from 'express';
 import { MeiliError, badRequest, indexNotFound, toMeiliError } from './meili-error';
 import { StandinIndex, type SearchBody, type Settings } from './standin-index';
 import { TaskQueue } from './tasks';
@@ -62,7 +62,6 @@ export function createStandinApp(state: StandinState, masterKey?: string): Expre
   const accept = (res: Response, ...task: Parameters<TaskQueue['enqueue']>) => void res.status(202).json(tasks.enqueue(...task));
 
   app.get('/health', (_req, res) => void res.json({ status: 'available' }));
-  app.get('/version', (_req, res) => void res.json({ pkgVersion: 'arcwise-search-standin', commitSha: 'none', commitDate: 'none' }));
 
   app.post('/indexes', (req, res) => {
     const { uid, primaryKey } = (req.body ?? {}) as { uid?: unknown; primaryKey?: unknown };
@@ -90,7 +89,7 @@ export function createStandinApp(state: StandinState, masterKey?: string): Expre
     accept(res, req.params.uid, 'settingsUpdate', { ...patch }, () => ensure(req.params.uid).updateSettings(patch));
   });
 
-  const addDocuments = (merge: boolean) => (req: Request<{ uid: string }>, res: Response) => {
+  app.post('/indexes/:uid/documents', (req, res) => {
     const body: unknown = req.body;
     const docs = (Array.isArray(body) ? body : [body]) as Doc[];
     if (!docs.every((d) => typeof d === 'object' && d !== null && !Array.isArray(d))) {
@@ -99,11 +98,9 @@ export function createStandinApp(state: StandinState, masterKey?: string): Expre
     const primaryKey = typeof req.query.primaryKey === 'string' ? req.query.primaryKey : undefined;
     const details = { receivedDocuments: docs.length, indexedDocuments: null };
     accept(res, req.params.uid, 'documentAdditionOrUpdate', details, async () => ({
-      indexedDocuments: await ensure(req.params.uid, primaryKey).addDocuments(docs, primaryKey, merge),
+      indexedDocuments: await ensure(req.params.uid, primaryKey).addDocuments(docs, primaryKey),
     }));
-  };
-  app.post('/indexes/:uid/documents', addDocuments(false));
-  app.put('/indexes/:uid/documents', addDocuments(true));
+  });
   app.post('/indexes/:uid/documents/delete-batch', (req, res) => {
     const ids: unknown = req.body;
     if (!Array.isArray(ids)) throw badRequest('malformed_payload', 'delete-batch takes an array of document ids.');
@@ -111,10 +108,9 @@ export function createStandinApp(state: StandinState, masterKey?: string): Expre
       deletedDocuments: existing(req.params.uid).deleteDocuments(ids),
     }));
   });
-  app.delete('/indexes/:uid/documents', (req, res) => {
-    accept(res, req.params.uid, 'documentDeletion', { deletedDocuments: null }, () => ({
-      deletedDocuments: existing(req.params.uid).deleteAll(),
-    }));
+  app.get('/indexes/:uid/stats', (req, res) => {
+    const { docs } = existing(req.params.uid);
+    res.json({ numberOfDocuments: docs.size, isIndexing: false, fieldDistribution: {} });
   });
 
   app.get('/indexes/:uid/documents/:id', (req, res) => {

@@ -19,18 +19,29 @@ export const DEFAULT_SETTINGS: Settings = {
   rankingRules: ['words', 'typo', 'proximity', 'attribute', 'sort', 'exactness'],
 };
 
-export type SearchBody = Pick<SearchParams, 'filter' | 'facets' | 'sort' | 'limit' | 'offset' | 'matchingStrategy'> & { q?: string | null };
+export type SearchBody = Pick<SearchParams, 'filter' | 'facets' | 'limit' | 'offset' | 'matchingStrategy'> & { q?: string | null };
 
 type Compare = (a: TextMatch, b: TextMatch) => number;
 
 /** Documents go into the engine in slices, so searches are answered between them during a large write. */
 const SLICE = 1_000;
 
-function compareValues(a: unknown, b: unknown): number {
-  const missing = (v: unknown) => v === undefined || v === null;
-  if (missing(a) || missing(b)) return Number(missing(a)) - Number(missing(b));
-  if (typeof a === 'number' && typeof b === 'number') return a - b;
-  return String(a).localeCompare(String(b));
+/** The first `k` items in `compare`'s order (stable), without sorting all of a large result. */
+function firstK<T>(items: readonly T[], k: number, compare: (a: T, b: T) => number): T[] {
+  const top: T[] = [];
+  if (k <= 0) return top;
+  for (const item of items) {
+    if (top.length === k && compare(item, top[k - 1]!) >= 0) continue;
+    let [lo, hi] = [0, top.length];
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (compare(item, top[mid]!) < 0) hi = mid;
+      else lo = mid + 1;
+    }
+    top.splice(lo, 0, item);
+    if (top.length > k) top.pop();
+  }
+  return top;
 }
 
 export class StandinIndex {
@@ -67,8 +78,8 @@ export class StandinIndex {
     this.updatedAt = new Date().toISOString();
   }
 
-  /** Adds documents, replacing (POST) or merging into (PUT) those with the same primary key. */
-  async addDocuments(docs: Doc[], primaryKey: string | undefined, merge: boolean): Promise<number> {
+  /** Adds documents, replacing those with the same primary key. */
+  async addDocuments(docs: Doc[], primaryKey: string | undefined): Promise<number> {
     if (!this.primaryKey) {
       const guess = primaryKey ?? Object.keys(docs[0] ?? {}).find((k) => /id$/i.test(k));
       if (!guess) throw badRequest('index_primary_key_no_candidate_found', 'The primary key inference failed: no field ends in `id`.');
@@ -82,10 +93,8 @@ export class StandinIndex {
       if (i > 0) await nextTurn();
       for (const doc of docs.slice(i, i + SLICE)) {
         const id = String(doc[pk]);
-        const old = this.docs.get(id);
-        const next = merge && old ? { ...old, ...doc } : doc;
-        this.docs.set(id, next);
-        text.set(id, next);
+        this.docs.set(id, doc);
+        text.set(id, doc);
       }
     }
     if (this.settings.searchableAttributes.includes('*')) this.text = null;
@@ -105,39 +114,22 @@ export class StandinIndex {
     return deleted;
   }
 
-  deleteAll(): number {
-    const n = this.docs.size;
-    this.docs.clear();
-    this.text = null;
-    this.updatedAt = new Date().toISOString();
-    return n;
-  }
-
-  /** Meilisearch's ranking rules in order; `proximity` is not modelled; `attr:asc|desc` sorts by a field. */
-  private comparator(sort: string[] | undefined): Compare {
-    const sortable = new Set(this.settings.sortableAttributes);
-    const byField = (spec: string, code: string): Compare => {
-      const m = /^([A-Za-z0-9_.-]+):(asc|desc)$/.exec(spec);
-      if (!m || (code === 'invalid_search_sort' && !sortable.has(m[1]!))) {
-        throw badRequest(
-          code,
-          `\`${spec}\` is not a sortable \`attribute:asc\` or \`attribute:desc\`. Sortable: \`${[...sortable].join(', ')}\`.`,
-        );
-      }
-      const [field, dir] = [m[1]!, m[2] === 'desc' ? -1 : 1];
-      return (a, b) => dir * compareValues(a.doc[field], b.doc[field]);
-    };
-    const sorts = (sort ?? []).map((s) => byField(s, 'invalid_search_sort'));
-    const rules: Compare[] = this.settings.rankingRules.flatMap((rule): Compare[] => {
+  /**
+   * Meilisearch's ranking rules in order; `proximity` is not modelled, nor `sort` (the app sends no
+   * sort); a custom `attr:asc|desc` rule orders by a numeric field.
+   */
+  private comparator(): Compare {
+    const rules = this.settings.rankingRules.flatMap((rule): Compare[] => {
       if (rule === 'words') return [(a, b) => b.words - a.words];
       if (rule === 'typo') return [(a, b) => a.typos - b.typos];
       if (rule === 'attribute') return [(a, b) => a.attribute - b.attribute];
       if (rule === 'exactness') return [(a, b) => b.score - a.score];
-      if (rule === 'sort') return sorts;
-      if (rule === 'proximity') return [];
-      return [byField(rule, 'invalid_settings_ranking_rules')];
+      const m = /^([A-Za-z0-9_.-]+):(asc|desc)$/.exec(rule);
+      if (!m) return [];
+      const [field, dir] = [m[1]!, m[2] === 'desc' ? -1 : 1];
+      const value = (m: TextMatch) => Number(m.doc[field] ?? 0);
+      return [(a, b) => dir * (value(a) - value(b))];
     });
-    if (!this.settings.rankingRules.includes('sort')) rules.push(...sorts);
     return (a, b) => {
       for (const rule of rules) {
         const c = rule(a, b);
@@ -160,17 +152,17 @@ export class StandinIndex {
     const unknownFacet = facets.find((f) => !filterable.has(f));
     if (unknownFacet)
       throw badRequest('invalid_search_facets', `Attribute \`${unknownFacet}\` is not filterable, so it cannot be a facet.`);
-    const compare = this.comparator(body.sort);
+    const compare = this.comparator();
 
     const q = body.q ?? '';
     const words = queryWords(q);
     const matches = words.length
-      ? this.textIndex().search(words, filter, body.matchingStrategy === 'all' ? 0 : offset + limit)
+      ? this.textIndex().search(words, filter, offset + limit, body.matchingStrategy !== 'all')
       : this.placeholder(filter);
-    matches.sort(compare);
-
     const response: Record<string, unknown> = {
-      hits: matches.slice(offset, offset + limit).map((m) => m.doc),
+      hits: firstK(matches, offset + limit, compare)
+        .slice(offset)
+        .map((m) => m.doc),
       query: q,
       processingTimeMs: 0,
       limit,

@@ -5,7 +5,7 @@
  * which counts a swap as one edit) keeps those within the word's budget.
  */
 import osa from 'damerau-levenshtein';
-import MiniSearch, { type SearchOptions } from 'minisearch';
+import MiniSearch from 'minisearch';
 import type { Doc, Predicate } from './filter';
 
 export interface TextMatch {
@@ -65,31 +65,46 @@ export class TextIndex {
   }
 
   /**
-   * Documents matching every word (the last as a prefix too), then, while fewer than `wanted` are
-   * found, those matching the words left after dropping the last ones (Meilisearch's "last" strategy;
-   * `wanted` 0 is its "all").
+   * Documents matching every word (the last as a prefix too), then, with `dropWords` (Meilisearch's
+   * "last" strategy) and while fewer than `wanted` are found, those matching the words left after
+   * dropping the last ones. Each set is looked up without typos first: when that already fills the
+   * page, the typo'd matches would all rank below it (the typo rule), so they are not looked for.
    */
-  search(words: string[], filter: Predicate | null, wanted: number): TextMatch[] {
+  search(words: string[], filter: Predicate | null, wanted: number, dropWords: boolean): TextMatch[] {
     const found = new Map<string, TextMatch>();
-    for (let n = words.length; n > 0 && (n === words.length || found.size < wanted); n--) {
-      for (const m of this.matchAll(words.slice(0, n), filter, n === words.length)) if (!found.has(m.id)) found.set(m.id, m);
+    for (let n = words.length; n > 0 && (n === words.length || (dropWords && found.size < wanted)); n--) {
+      const part = words.slice(0, n);
+      const exact = this.matchAll(part, filter, n === words.length, false);
+      const enough = found.size + exact.length >= wanted;
+      for (const m of enough ? exact : this.matchAll(part, filter, n === words.length, true)) if (!found.has(m.id)) found.set(m.id, m);
     }
     return [...found.values()];
   }
 
-  /** AND of the words; `keep` runs before the engine builds a result for a document (a boost of 0 leaves it out). */
-  private run(query: string, prefix: (i: number) => boolean, keep: (id: string) => boolean) {
-    const options: SearchOptions = {
-      combineWith: 'AND',
-      prefix: (_t, i) => prefix(i),
-      fuzzy,
-      maxFuzzy: 2,
-      boostDocument: (id: string) => +keep(id),
-    };
-    return this.engine.search(query, options);
+  /**
+   * How many documents hold the word as it is, in any field: read from the sizes of minisearch's own
+   * postings (its term index, not part of its typed API), so picking the rarest word costs no walk.
+   */
+  private frequency(word: string): number {
+    const postings = (this.engine as unknown as { _index: { get(term: string): Map<number, Map<number, number>> | undefined } })._index;
+    let n = 0;
+    postings.get(word)?.forEach((docs) => (n += docs.size));
+    return n;
   }
 
-  private matchAll(words: string[], filter: Predicate | null, prefixLast: boolean): TextMatch[] {
+  /** AND of the words; `keep` runs before the engine builds a result for a document (a boost of 0 leaves it out). */
+  private run(query: string, prefix: (i: number) => boolean, keep: (id: string) => boolean, typos: boolean) {
+    const fuzzyOf = typos ? fuzzy : false;
+    return this.engine.search(query, {
+      combineWith: 'AND',
+      prefix: (_t, i) => prefix(i),
+      fuzzy: fuzzyOf,
+      maxFuzzy: 2,
+      boostDocument: (id: string) => +keep(id),
+    });
+  }
+
+  private matchAll(words: string[], filter: Predicate | null, prefixLast: boolean, typos: boolean): TextMatch[] {
     const last = words.length - 1;
     const isLast = (i: number) => prefixLast && i === last;
     let keep = filter ? (id: string) => filter(this.docs.get(id)!) : () => true;
@@ -101,12 +116,9 @@ export class TextIndex {
           words[i]!,
           () => isLast(i),
           (id) => (visit(id), false),
+          typos,
         );
-      const counts = words.map((_w, i) => {
-        let n = 0;
-        walk(i, () => n++);
-        return n;
-      });
+      const counts = words.map((w) => this.frequency(w));
       const gate = new Set<string>();
       walk(counts.indexOf(Math.min(...counts)), (id) => keep(id) && gate.add(id));
       if (gate.size === 0) return [];
@@ -126,7 +138,7 @@ export class TextIndex {
       return d;
     };
     const matches: TextMatch[] = [];
-    for (const r of this.run(words.join(' '), isLast, keep)) {
+    for (const r of this.run(words.join(' '), isLast, keep, typos)) {
       let [typos, attribute] = [0, 0];
       for (let i = 0; i <= last; i++) {
         let [best, field] = [Infinity, Infinity];

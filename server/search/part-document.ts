@@ -13,6 +13,8 @@ export interface PartDocument {
   gtin: string | null;
   kind: 'coil' | 'plug';
   description: string;
+  /** The spec in the words and numbers a clerk types ("14 mm thread", "19 mm reach", "4 pin"). */
+  specWords: string;
   interchangeNumbers: string[];
   supersededNumbers: string[];
   engineCodes: string[];
@@ -47,6 +49,7 @@ export const SEARCHABLE_ATTRIBUTES = [
   'partNumber',
   'brand',
   'description',
+  'specWords',
   'engineCodes',
   'vehicles',
 ];
@@ -156,6 +159,28 @@ interface DocumentRow {
   gap_mm: number | null;
 }
 
+/** A spec as words: the plain forms a clerk uses at the counter, for free-text search. */
+function specWords(r: DocumentRow): string {
+  const words: (string | number | null | false)[] =
+    r.kind === 'plug'
+      ? [
+          r.thread_mm !== null && `M${r.thread_mm} ${r.thread_mm} mm thread`,
+          r.reach_mm !== null && `${r.reach_mm} mm reach`,
+          r.seat && `${r.seat} seat`,
+          r.hex_mm !== null && `${r.hex_mm} mm hex`,
+          r.heat_step !== null && `heat step ${r.heat_step}`,
+          r.resistor !== null && (r.resistor ? 'resistor' : 'non-resistor'),
+          r.gap_mm !== null && `${r.gap_mm} mm gap`,
+        ]
+      : [
+          r.architecture,
+          r.driver && (r.driver === 'integrated' ? 'integrated igniter' : 'external driver'),
+          r.connector_pins !== null && `${r.connector_pins} pin`,
+          r.connector_key && `${r.connector_key} key`,
+        ];
+  return words.filter((w) => w !== null && w !== false).join(' ');
+}
+
 function toDocument(r: DocumentRow): PartDocument {
   return {
     id: r.id,
@@ -165,6 +190,7 @@ function toDocument(r: DocumentRow): PartDocument {
     gtin: r.gtin,
     kind: r.kind,
     description: r.description,
+    specWords: specWords(r),
     interchangeNumbers: r.interchange_numbers,
     supersededNumbers: r.superseded_numbers,
     engineCodes: r.engine_codes,

@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { CompatSettings } from '../../shared/compat';
 import { looksLikePartNumber, normalizePartNumber } from '../../shared/part-number';
 import type { SearchHit, SearchQuery, SearchResponse } from '../../shared/schemas/search';
+import { PART_KINDS, type PartKind } from '../../shared/schemas/specs';
 import { exactNumberHits } from '../search/exact-number';
 import { FACET_ATTRIBUTES } from '../search/part-document';
 import { FACET_FIELDS } from '../../shared/schemas/search';
@@ -47,11 +48,19 @@ async function withInterchangeChecks(ds: DataSource, hits: SearchHit[], settings
   );
 }
 
-/** Facet counts cost time on every hit: all of them for spec search, kind and brand for text, none for a number. */
-function facetsFor(query: SearchQuery, numberLike: boolean): string[] {
-  const specSearch = query.q.trim() === '' || FACET_FIELDS.some((f) => query[f] !== undefined);
-  if (specSearch) return FACET_ATTRIBUTES;
-  return numberLike ? [] : ['kind', 'brand'];
+/** How a kind is said at the counter: "pencil coil", "iridium spark plug". */
+const KIND_WORDS: Record<PartKind, RegExp> = { coil: /\bcoils?\b/gi, plug: /\b(?:spark\s+)?plugs?\b/gi };
+
+/**
+ * A kind named in the words is the kind filter rather than one more word: every coil's text says
+ * "coil", so as a word it ranks nothing and makes the engine walk every coil. Not when both kinds
+ * are named ("coil on plug" is an architecture) or the words are only the kind.
+ */
+function kindFromWords(raw: string, kind: PartKind | undefined): { words: string; kind: PartKind | undefined } {
+  const named = PART_KINDS.filter((k) => raw.match(KIND_WORDS[k]));
+  if (named.length !== 1 || (kind && kind !== named[0])) return { words: raw, kind };
+  const words = raw.replace(KIND_WORDS[named[0]!], ' ').replace(/\s+/g, ' ').trim();
+  return words ? { words, kind: named[0] } : { words: raw, kind };
 }
 
 export async function searchParts(
@@ -67,9 +76,20 @@ export async function searchParts(
     const exact = await exactNumberHits(ds, normalizePartNumber(raw), query.limit);
     if (exact.length) return { hits: await withInterchangeChecks(ds, exact, settings, query.engineId), total: exact.length, facets: {} };
   }
-  const base = { filter: buildFilters(query), facets: facetsFor(query, numberLike), limit: query.limit, offset: query.offset };
-  let res = await index.search(numberLike ? normalizePartNumber(raw) : raw, base);
-  if (res.hits.length === 0 && numberLike) res = await index.search(raw, base);
+  const said = numberLike ? { words: raw, kind: query.kind } : kindFromWords(raw, query.kind);
+  // Facet counts cost a pass over every match: only when the filter controls ask for them.
+  const facets = query.facets ? FACET_ATTRIBUTES : [];
+  const base = { filter: buildFilters({ ...query, kind: said.kind }), facets, limit: query.limit, offset: query.offset };
+  // Every word first (a clerk who types more means fewer parts); only when nothing has them all,
+  // Meilisearch's "last" strategy, which drops words from the end. A number is tried folded first.
+  const tries: [string, 'all' | 'last'][] = numberLike ? [[normalizePartNumber(raw), 'all']] : [];
+  tries.push([said.words, 'all']);
+  if (said.words.split(/\s+/).length > 1) tries.push([said.words, 'last']);
+  let res = await index.search(tries[0]![0], { ...base, matchingStrategy: tries[0]![1] });
+  for (const [q, matchingStrategy] of tries.slice(1)) {
+    if (res.hits.length > 0) break;
+    res = await index.search(q, { ...base, matchingStrategy });
+  }
   return {
     hits: await withInterchangeChecks(
       ds,

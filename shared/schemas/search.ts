@@ -37,6 +37,8 @@ export const searchQuerySchema = searchFacetQuerySchema.extend({
   offset: z.coerce.number().int().min(0).max(10_000).default(0),
   /** The vehicle's engine the clerk picked: interchange claims are judged on it. */
   engineId: uuidSchema.optional(),
+  /** Also count every match by spec field, for the filter controls (a pass over all matches). */
+  facets: bool.optional(),
 });
 export type SearchQuery = z.infer<typeof searchQuerySchema>;
 

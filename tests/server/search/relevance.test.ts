@@ -1,6 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { PartDetail } from '../../../shared/schemas/parts';
 import type { SearchResponse } from '../../../shared/schemas/search';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
+import { onlyJob, waitForJobState } from '../../helpers/jobs';
 import { JUDGED_QUERIES, reciprocalRank } from '../../helpers/judged-queries';
 import { createTestApp, signIn, type Agent, type TestApp } from '../../helpers/test-app';
 
@@ -52,12 +54,10 @@ describe('search relevance on the judged queries', () => {
       .set('x-csrf-token', token)
       .send({ brand: 'Quaywell', partNumber: stub, kind: 'coil', description: words });
     expect(created.status, JSON.stringify(created.body)).toBe(201);
-    // The index catches up after the commit: wait until the stub is found by its number.
-    const deadline = Date.now() + 20_000;
-    while (!(await top(stub)).includes(stub)) {
-      if (Date.now() > deadline) throw new Error('the new part never reached the search index');
-      await new Promise((r) => setTimeout(r, 100));
-    }
+    // The index catches up after the commit: wait for the refresh job (a search for the number
+    // would find the stub in PostgreSQL before the index has it).
+    const job = await onlyJob(t.deps.dataSource, 'search.refresh', { partIds: [(created.body as PartDetail).part.id] });
+    await waitForJobState(t.deps.dataSource, job.id, ['completed']);
     const hits = await top('coil-on-plug integrated igniter 3-pin A', 20);
     expect(hits).toContain(stub);
     expect(hits.indexOf('QW-IC 3101')).toBeGreaterThanOrEqual(0);

@@ -51,7 +51,8 @@ export function CounterPage() {
   const results = useSearchParts(search);
   // Facet counts from the same words and kind without the spec filters, so no choice disappears.
   const facetSearch = useMemo<PartSearch>(
-    () => (kind ? { q: settledText, kind, filters: {}, limit: 1 } : { q: '', kind: null, filters: {}, limit: 1 }),
+    () =>
+      kind ? { q: settledText, kind, filters: {}, limit: 1, facets: true } : { q: '', kind: null, filters: {}, limit: 1, facets: true },
     [settledText, kind],
   );
   const facets = useSearchParts(facetSearch);

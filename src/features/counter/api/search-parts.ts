@@ -16,12 +16,15 @@ export interface PartSearch {
   limit: number;
   /** The picked vehicle's engine: interchange claims are judged on it. */
   engineId?: string | null;
+  /** Ask for the spec fields' counts over every match (the filter controls want them). */
+  facets?: boolean;
 }
 
 export function searchParams(search: PartSearch): URLSearchParams {
   const params = new URLSearchParams({ q: search.q.trim(), limit: String(search.limit) });
   if (search.kind) params.set('kind', search.kind);
   if (search.engineId) params.set('engineId', search.engineId);
+  if (search.facets) params.set('facets', 'true');
   for (const field of FACET_FIELDS) {
     const value = search.filters[field]?.trim();
     if (value) params.set(field, value);
