@@ -10,7 +10,7 @@ import { keyCallsRecorded } from './services/api-keys.service';
 /** Database first, then everything that depends on it; the app is built from these. */
 export async function buildDeps(env: Env): Promise<AppDeps> {
   if (!env.SMTP_URL) throw new Error('SMTP_URL is not set: start the local mail catcher first.');
-  const dataSource = await createDataSource(env.DATABASE_URL).initialize();
+  const dataSource = await createDataSource(env.DATABASE_URL, env.DATABASE_REPLICA_URLS).initialize();
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 10 });
   if (!env.MEILI_HOST) throw new Error('MEILI_HOST is not set: start the local search stand-in first.');
   const mailer = createMailer(env.SMTP_URL, env.MAIL_FROM);
