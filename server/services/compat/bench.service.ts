@@ -4,7 +4,8 @@ import type { BenchBody } from '../../../shared/schemas/bench';
 import type { CoilSpec } from '../../../shared/schemas/specs';
 import { getSettings } from '../settings.service';
 import { asBadRequest } from './compare.service';
-import { resolveCoil, type Resolved } from './resolve';
+import type { Resolved } from '../../presenters/compat.presenter';
+import { resolveCoil } from './resolve';
 
 /** Readings of a coil on the bench, corrected to 20 °C and held against its windows. */
 export async function runBenchTest(ds: DataSource, body: BenchBody): Promise<{ result: BenchTestResult; coil: Resolved<CoilSpec> }> {

@@ -2,15 +2,10 @@ import type { EntityManager } from 'typeorm';
 import type { CoilRef, EngineRef, PlugRef } from '../../../shared/schemas/compat';
 import type { CoilSpec, EngineSpec, ResolvedPlugSpec } from '../../../shared/schemas/specs';
 import { AppError } from '../../errors';
+import type { Resolved, ResolvedEngine } from '../../presenters/compat.presenter';
 import { findEngine } from '../../repositories/engines.repository';
 import { findPartRows } from '../../repositories/parts.repository';
 import { findSpecs } from '../../repositories/specs.repository';
-
-export interface Resolved<S> {
-  spec: S;
-  label: string;
-  partId: string | null;
-}
 
 const fieldError = (field: string, message: string) => AppError.badRequest(`${field}: ${message}`, [{ field, message }]);
 
@@ -36,12 +31,6 @@ export async function resolvePlug(ex: EntityManager, ref: PlugRef, field: string
   if (row.kind !== 'plug') throw fieldError(`${field}.partId`, `${label} is a coil, not a plug`);
   if (!spec?.plug) throw fieldError(`${field}.partId`, `${label} has no spec — no verdict`);
   return { spec: spec.plug, label, partId: row.id };
-}
-
-export interface ResolvedEngine {
-  spec: EngineSpec;
-  label: string;
-  engineId: string | null;
 }
 
 export function engineLabel(e: EngineSpec): string {
