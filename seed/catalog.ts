@@ -1,6 +1,8 @@
 import type { EntityManager } from 'typeorm';
+import { z } from 'zod';
 import { normalizePartNumber } from '../shared/part-number';
-import { writeCoilSpec, writePlugSpec } from '../server/services/catalog/catalog-edit.service';
+import { queryCount, queryIds, queryRows } from '../server/db/executor';
+import { writeCoilSpec, writePlugSpec } from '../server/repositories/specs.repository';
 import { brands, engines, fitments, interchange, parts, stock, supersessions, supplierPrices, suppliers, vehicles } from './data';
 
 export interface CatalogCounts {
@@ -11,14 +13,16 @@ export interface CatalogCounts {
 }
 
 const brandNorm = (name: string) => name.trim().toLowerCase();
+const keyedRow = z.object({ id: z.string(), key: z.string() });
 
 /**
  * Loads the invented demo catalog. Every insert is ON CONFLICT DO NOTHING, so a second run changes
  * nothing and a buyer's later edits (prices, specs) are never overwritten by the demo data.
  */
 export async function seedCatalog(m: EntityManager): Promise<CatalogCounts> {
-  const count = async (table: string): Promise<number> =>
-    ((await m.query(`SELECT count(*)::int AS n FROM ${table}`)) as { n: number }[])[0]?.n ?? 0;
+  const count = (table: string): Promise<number> => queryCount(m, `SELECT count(*)::int AS n FROM ${table}`);
+  /** Ids by a natural key: the query answers `id` and `key`. */
+  const idsBy = async (sql: string): Promise<Map<string, string>> => new Map((await queryRows(m, keyedRow, sql)).map((r) => [r.key, r.id]));
   const before = {
     parts: await count('part'),
     engines: await count('engine'),
@@ -40,9 +44,7 @@ export async function seedCatalog(m: EntityManager): Promise<CatalogCounts> {
       );
     }
   }
-  const brandIds = new Map<string, string>(
-    ((await m.query(`SELECT id, name_norm FROM brand`)) as { id: string; name_norm: string }[]).map((r) => [r.name_norm, r.id]),
-  );
+  const brandIds = await idsBy(`SELECT id, name_norm AS key FROM brand`);
 
   for (const e of engines) {
     await m.query(
@@ -66,30 +68,23 @@ export async function seedCatalog(m: EntityManager): Promise<CatalogCounts> {
       ],
     );
   }
-  const engineIds = new Map<string, string>(
-    ((await m.query(`SELECT id, code FROM engine`)) as { id: string; code: string }[]).map((r) => [r.code, r.id]),
-  );
+  const engineIds = await idsBy(`SELECT id, code AS key FROM engine`);
 
   for (const p of parts) {
     const brandId = brandIds.get(brandNorm(p.brand));
     if (!brandId) throw new Error(`seed: unknown brand ${p.brand}`);
-    const rows = (await m.query(
+    const [id] = await queryIds(
+      m,
       `INSERT INTO part (brand_id, part_number, part_number_norm, kind, description, gtin, status)
        VALUES ($1,$2,$3,$4,$5,$6,$7) ON CONFLICT (brand_id, part_number_norm) DO NOTHING RETURNING id`,
       [brandId, p.partNumber, normalizePartNumber(p.partNumber), p.kind, p.description, p.gtin, p.status],
-    )) as { id: string }[];
-    const id = rows[0]?.id;
+    );
     if (!id) continue;
-    // The same writers as the catalog's edit service: one definition of how a spec is stored.
+    // The same writers as the catalog's edits: one definition of how a spec is stored.
     if (p.kind === 'coil') await writeCoilSpec(m, id, p.spec);
     else await writePlugSpec(m, id, p.spec);
   }
-  const partIds = new Map<string, string>(
-    ((await m.query(`SELECT id, part_number_norm FROM part`)) as { id: string; part_number_norm: string }[]).map((r) => [
-      r.part_number_norm,
-      r.id,
-    ]),
-  );
+  const partIds = await idsBy(`SELECT id, part_number_norm AS key FROM part`);
   const partId = (printed: string): string => {
     const id = partIds.get(normalizePartNumber(printed));
     if (!id) throw new Error(`seed: unknown part ${printed}`);
@@ -140,9 +135,7 @@ export async function seedCatalog(m: EntityManager): Promise<CatalogCounts> {
       s.phone,
     ]);
   }
-  const supplierIds = new Map<string, string>(
-    ((await m.query(`SELECT id, key FROM supplier`)) as { id: string; key: string }[]).map((r) => [r.key, r.id]),
-  );
+  const supplierIds = await idsBy(`SELECT id, key FROM supplier`);
   for (const p of supplierPrices) {
     await m.query(
       `INSERT INTO supplier_price (supplier_id, part_id, cost_cents, list_cents, core_cents, pack_qty, effective_date) VALUES ($1,$2,$3,$4,$5,$6,$7) ON CONFLICT DO NOTHING`,

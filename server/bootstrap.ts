@@ -12,7 +12,7 @@ import { keyCallsRecorded } from './services/api-keys.service';
 /** Database first, then everything that depends on it; the app is built from these. */
 export async function buildDeps(env: Env): Promise<AppDeps> {
   if (!env.SMTP_URL) throw new Error('SMTP_URL is not set: start the local mail catcher first.');
-  const dataSource = await createDataSource(env.DATABASE_URL).initialize();
+  const dataSource = await createDataSource(env.DATABASE_URL, env.DATABASE_REPLICA_URLS).initialize();
   const logger = createLogger(env);
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 10 });
   // An idle client whose connection drops (a database restart, a failover) is dropped from the pool;

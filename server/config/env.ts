@@ -8,6 +8,17 @@ const envSchema = z.object({
   HOST: z.string().default('0.0.0.0'),
   APP_URL: z.string().url().optional(),
   DATABASE_URL: z.string().url(),
+  /** Read replicas, comma-separated: the read-only work goes there (db/read-only.ts), the rest to DATABASE_URL. */
+  DATABASE_REPLICA_URLS: z
+    .string()
+    .optional()
+    .transform((v) =>
+      (v ?? '')
+        .split(',')
+        .map((u) => u.trim())
+        .filter(Boolean),
+    )
+    .pipe(z.array(z.string().url())),
   SESSION_SECRET: z.string().min(16).default('arcwise-development-secret-change-me'),
   COOKIE_SECURE: boolish.default(false),
   TRUST_PROXY: boolish.default(false),

@@ -78,7 +78,7 @@ export function createMetrics(sources: MetricSources): Metrics {
     async collect() {
       this.reset();
       try {
-        const counts = new Map((await countQueuedJobs(sources.dataSource)).map((r) => [`${r.name} ${r.state}`, r.jobs]));
+        const counts = new Map((await countQueuedJobs(sources.dataSource.manager)).map((r) => [`${r.name} ${r.state}`, r.jobs]));
         for (const queue of JOB_NAMES)
           for (const state of QUEUE_DEPTH_STATES) this.set({ queue, state }, counts.get(`${queue} ${state}`) ?? 0);
       } catch (err) {

@@ -1,9 +1,11 @@
 import type { Check, Verdict } from '../../shared/compat';
 import type { Role } from '../../shared/roles';
 import type { AlternatesResponse } from '../../shared/schemas/alternates';
+import type { PartRow } from '../repositories/parts.repository';
+import type { PriceRow } from '../repositories/prices.repository';
 import { presentCheck } from './compat.presenter';
-import { presentPart, type PartRow } from './part.presenter';
-import { sellPrice, type PriceRow } from './stock-price.presenter';
+import { presentPart } from './part.presenter';
+import { sellPrice } from './stock-price.presenter';
 
 export interface AlternatesRecord {
   /** The engine's fitted part of the kind asked for; null when none is on file. */

@@ -1,4 +1,4 @@
-import type { ApiKey, CreatedApiKey } from '../../shared/schemas/api-keys';
+import type { ApiKey, ApiKeyList, CreatedApiKey } from '../../shared/schemas/api-keys';
 import type { ApiKeyEntity } from '../entities';
 
 /** A key as listed: its hash never leaves, and the key itself is not kept to leave. */
@@ -14,6 +14,8 @@ export function presentApiKey(k: ApiKeyEntity): ApiKey {
     revokedAt: k.revokedAt?.toISOString() ?? null,
   };
 }
+
+export const presentApiKeys = (keys: ApiKeyEntity[]): ApiKeyList => ({ apiKeys: keys.map(presentApiKey) });
 
 /** The answer to creating a key: the one time the key is shown. */
 export function presentCreatedApiKey(k: ApiKeyEntity, key: string): CreatedApiKey {

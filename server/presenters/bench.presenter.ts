@@ -1,7 +1,7 @@
 import type { BenchTestResult } from '../../shared/compat';
 import type { BenchResult } from '../../shared/schemas/bench';
 import { CAUTIONS } from '../../shared/schemas/compat';
-import type { Resolved } from '../services/compat/resolve';
+import type { Resolved } from './compat.presenter';
 
 /** POST /api/bench/coil: the readings at 20 °C against the coil's windows, and which coil that was. */
 export function presentBenchResult(r: BenchTestResult, coil: Pick<Resolved<unknown>, 'label' | 'partId'>): BenchResult {

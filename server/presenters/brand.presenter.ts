@@ -1,15 +1,7 @@
 import type { Brand, BrandResponse, BrandsResponse } from '../../shared/schemas/brands';
+import type { BrandRow } from '../repositories/brands.repository';
 
-export interface BrandRecord {
-  id: string;
-  name: string;
-  ours: boolean;
-  heat_code_note: string | null;
-  /** Hottest first. */
-  heat_codes: { code: string; heatStep: number }[];
-}
-
-export function presentBrand(b: BrandRecord): Brand {
+export function presentBrand(b: BrandRow): Brand {
   return {
     id: b.id,
     name: b.name,
@@ -19,5 +11,5 @@ export function presentBrand(b: BrandRecord): Brand {
   };
 }
 
-export const presentBrands = (rows: BrandRecord[]): BrandsResponse => ({ brands: rows.map(presentBrand) });
-export const presentCreatedBrand = (row: BrandRecord): BrandResponse => ({ brand: presentBrand(row) });
+export const presentBrands = (rows: BrandRow[]): BrandsResponse => ({ brands: rows.map(presentBrand) });
+export const presentCreatedBrand = (row: BrandRow): BrandResponse => ({ brand: presentBrand(row) });

@@ -1,7 +1,6 @@
 import type { Check, CoilComparison, LoadPointResult, PlugComparison } from '../../shared/compat';
 import { CAUTIONS, type CheckRow, type CompatResult } from '../../shared/schemas/compat';
-import type { CoilSpec, ResolvedPlugSpec } from '../../shared/schemas/specs';
-import type { Resolved, ResolvedEngine } from '../services/compat/resolve';
+import type { CoilSpec, EngineSpec, ResolvedPlugSpec } from '../../shared/schemas/specs';
 
 export const presentCheck = (c: Check): CheckRow => ({
   id: c.id,
@@ -21,6 +20,19 @@ const presentLoadPoint = (p: LoadPointResult): CompatResult['loadPoints'][number
   availableKv: p.availableKv,
   reservePct: p.reservePct,
 });
+
+/** A side of a comparison: a spec from the catalog (with its part) or typed in, and how it is named. */
+export interface Resolved<S> {
+  spec: S;
+  label: string;
+  partId: string | null;
+}
+
+export interface ResolvedEngine {
+  spec: EngineSpec;
+  label: string;
+  engineId: string | null;
+}
 
 interface Sides<S> {
   original: Resolved<S>;

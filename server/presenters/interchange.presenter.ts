@@ -1,16 +1,8 @@
 import type { InterchangeResponse } from '../../shared/schemas/interchange';
-
-export interface InterchangeClaimRecord {
-  id: string;
-  part_id: string;
-  foreign_brand: string;
-  foreign_number: string;
-  source: string;
-  confidence: number;
-}
+import type { InterchangeClaimRow } from '../repositories/interchange.repository';
 
 /** POST /api/interchange: the claim as stored. */
-export function presentInterchangeClaim(r: InterchangeClaimRecord): InterchangeResponse {
+export function presentInterchangeClaim(r: InterchangeClaimRow): InterchangeResponse {
   return {
     interchange: {
       id: r.id,

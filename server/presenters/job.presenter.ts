@@ -1,4 +1,4 @@
-import type { JobSummary } from '../../shared/schemas/jobs';
+import type { JobsResponse, JobSummary, RetryJobResponse } from '../../shared/schemas/jobs';
 import { JOBS } from '../jobs';
 import type { JobDefinition } from '../jobs/job';
 import type { JobRow } from '../repositories/jobs.repository';
@@ -27,3 +27,6 @@ export function presentJob(row: JobRow): JobSummary {
     failedAt: row.state === 'failed' ? (row.completed_on?.toISOString() ?? null) : null,
   };
 }
+
+export const presentJobs = (rows: JobRow[]): JobsResponse => ({ jobs: rows.map(presentJob) });
+export const presentRetriedJob = (row: JobRow): RetryJobResponse => ({ job: presentJob(row) });

@@ -1,23 +1,14 @@
+import type { Verdict } from '../../shared/compat';
 import type { Role } from '../../shared/roles';
-import type { InterchangeCheck } from '../../shared/schemas/compat';
+import type { CheckRow, InterchangeCheck } from '../../shared/schemas/compat';
 import type { InterchangeRow, PartDetail, PartRef, PartSummary } from '../../shared/schemas/parts';
-import type { CoilSpec, PartSpec, ResolvedPlugSpec } from '../../shared/schemas/specs';
-import type { CoilSpecEntity, PlugSpecEntity } from '../entities';
-import type { InterchangeVerdict } from '../services/compat/interchange-verdict.service';
-import { presentPrice, presentStock, sellPrice, type PriceRow } from './stock-price.presenter';
-
-export interface PartRow {
-  id: string;
-  brand: string;
-  ours: boolean;
-  part_number: string;
-  kind: 'coil' | 'plug';
-  description: string;
-  gtin: string | null;
-  status: 'active' | 'discontinued';
-  superseded_by_id: string | null;
-  has_spec: boolean;
-}
+import type { PartSpec } from '../../shared/schemas/specs';
+import type { PartClaimRow } from '../repositories/interchange.repository';
+import type { ChainRow, PartRow } from '../repositories/parts.repository';
+import type { PriceRow } from '../repositories/prices.repository';
+import type { PartSpecs } from '../repositories/specs.repository';
+import type { StockLevel } from '../repositories/stock.repository';
+import { presentPrice, presentStock, sellPrice } from './stock-price.presenter';
 
 export function presentPart(r: PartRow): PartSummary {
   return {
@@ -34,46 +25,16 @@ export function presentPart(r: PartRow): PartSummary {
   };
 }
 
-export function presentCoilSpec(s: CoilSpecEntity): CoilSpec {
-  return {
-    architecture: s.architecture,
-    driver: s.driver,
-    outputs: s.outputs,
-    connectorPins: s.connectorPins,
-    connectorKey: s.connectorKey,
-    primaryOhmMin: s.primaryOhmMin,
-    primaryOhmMax: s.primaryOhmMax,
-    primaryInductanceMh: s.primaryInductanceMh,
-    secondaryKohmMin: s.secondaryKohmMin,
-    secondaryKohmMax: s.secondaryKohmMax,
-    turnsRatio: s.turnsRatio,
-    availableKv: s.availableKv,
-    peakCurrentA: s.peakCurrentA,
-  };
-}
-
-/** A plug spec with the heat step its brand's table maps the heat code to. */
-export function presentPlugSpec(s: PlugSpecEntity, heatStep: number): ResolvedPlugSpec {
-  return {
-    threadMm: s.threadMm,
-    threadPitchMm: s.threadPitchMm,
-    reachMm: s.reachMm,
-    seat: s.seat,
-    hexMm: s.hexMm,
-    heatCode: s.heatCode,
-    heatStep,
-    gapMm: s.gapMm,
-    regappable: s.regappable,
-    resistor: s.resistor,
-    resistorKohm: s.resistorKohm,
-    projectedTip: s.projectedTip,
-    electrode: s.electrode,
-  };
-}
-
 /** A part's spec as loaded (one kind or none) as the API shows it. */
-export const presentSpec = (spec: { coil?: CoilSpec; plug?: ResolvedPlugSpec } | undefined): PartSpec | null =>
-  spec?.coil ?? spec?.plug ?? null;
+export const presentSpec = (spec: PartSpecs | undefined): PartSpec | null => spec?.coil ?? spec?.plug ?? null;
+
+/** The judgement of an interchange claim on an engine (services/compat/interchange-verdict.service.ts). */
+export interface InterchangeVerdict {
+  verdict: Verdict;
+  /** The rows that are not go, with their reasons: why a claimed equivalent is doubtful or wrong. */
+  concerns: CheckRow[];
+  engine: string;
+}
 
 /** An interchange verdict with its concerns cut to what a claim shows: which check, how bad, why. */
 export function presentInterchangeCheck(check: InterchangeVerdict): InterchangeCheck {
@@ -84,32 +45,18 @@ export function presentInterchangeCheck(check: InterchangeVerdict): InterchangeC
   };
 }
 
-export interface InterchangeRecord {
-  id: string;
-  brand: string;
-  number: string;
-  source: string;
-  confidence: number;
-  original_part_id: string | null;
-}
-
-export interface ChainRecord {
-  id: string;
-  part_number: string;
-}
-
 export interface PartDetailRecord {
   row: PartRow;
-  spec: { coil?: CoilSpec; plug?: ResolvedPlugSpec } | undefined;
-  stock: { onHand: number; bin: string };
+  spec: PartSpecs | undefined;
+  stock: StockLevel;
   prices: PriceRow[];
-  interchange: { claim: InterchangeRecord; check: InterchangeVerdict | null }[];
+  interchange: { claim: PartClaimRow; check: InterchangeVerdict | null }[];
   /** The chain up from the part (the part first, its successor next, the current part last) and down (what it replaced). */
-  up: ChainRecord[];
-  down: ChainRecord[];
+  up: ChainRow[];
+  down: ChainRow[];
 }
 
-const partRef = (r: ChainRecord): PartRef => ({ id: r.id, partNumber: r.part_number });
+const partRef = (r: ChainRow): PartRef => ({ id: r.id, partNumber: r.part_number });
 
 function presentInterchangeRow({ claim, check }: PartDetailRecord['interchange'][number]): InterchangeRow {
   return {

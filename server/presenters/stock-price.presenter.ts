@@ -1,15 +1,6 @@
 import { canSeeCost, type Role } from '../../shared/roles';
 import type { Price, StockView } from '../../shared/schemas/parts';
-
-export interface PriceRow {
-  supplierId: string;
-  supplier: string;
-  costCents: number;
-  listCents: number;
-  coreCents: number;
-  packQty: number;
-  effectiveDate: string;
-}
+import type { PriceRow } from '../repositories/prices.repository';
 
 /** Margin on the sell (list) price, in percent with one decimal. */
 export function marginPct(costCents: number, listCents: number): number {

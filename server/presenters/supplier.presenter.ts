@@ -1,20 +1,7 @@
-import type { Mapping } from '../../shared/price-list/mapping';
 import type { Supplier, SupplierResponse, SuppliersResponse } from '../../shared/schemas/suppliers';
+import type { SupplierRow } from '../repositories/suppliers.repository';
 
-/** A supplier row with its last committed price list joined. */
-export interface SupplierRecord {
-  id: string;
-  key: string;
-  name: string;
-  contact_email: string | null;
-  phone: string | null;
-  mapping: Mapping | null;
-  created_at: Date;
-  last_id: string | null;
-  last_at: Date | null;
-}
-
-export function presentSupplier(r: SupplierRecord): Supplier {
+export function presentSupplier(r: SupplierRow): Supplier {
   return {
     id: r.id,
     key: r.key,
@@ -28,5 +15,5 @@ export function presentSupplier(r: SupplierRecord): Supplier {
   };
 }
 
-export const presentSuppliers = (rows: SupplierRecord[]): SuppliersResponse => ({ suppliers: rows.map(presentSupplier) });
-export const presentSupplierResponse = (row: SupplierRecord): SupplierResponse => ({ supplier: presentSupplier(row) });
+export const presentSuppliers = (rows: SupplierRow[]): SuppliersResponse => ({ suppliers: rows.map(presentSupplier) });
+export const presentSupplierResponse = (row: SupplierRow): SupplierResponse => ({ supplier: presentSupplier(row) });

@@ -7,28 +7,21 @@ import type {
   VehicleModelsResponse,
   VehicleYearsResponse,
 } from '../../shared/schemas/vehicles';
-import type { CoilSpec, ResolvedPlugSpec } from '../../shared/schemas/specs';
-import type { EngineEntity } from '../entities';
-import { engineSpecOf } from '../services/catalog/part-loader';
-import { presentPart, presentSpec, type PartRow } from './part.presenter';
-import { presentStock, sellPrice, type PriceRow } from './stock-price.presenter';
+import type { EngineRecord } from '../repositories/engines.repository';
+import type { PartRow } from '../repositories/parts.repository';
+import type { PriceRow } from '../repositories/prices.repository';
+import type { PartSpecs } from '../repositories/specs.repository';
+import type { StockLevel } from '../repositories/stock.repository';
+import type { VehicleEngineRow } from '../repositories/vehicles.repository';
+import { presentPart, presentSpec } from './part.presenter';
+import { presentStock, sellPrice } from './stock-price.presenter';
 
 export const presentYears = (years: number[]): VehicleYearsResponse => ({ years });
 export const presentMakes = (makes: string[]): VehicleMakesResponse => ({ makes });
 export const presentModels = (models: string[]): VehicleModelsResponse => ({ models });
 
-export interface VehicleEngineRecord {
-  id: string;
-  code: string;
-  displacement_l: number;
-  cylinders: number;
-  aspiration: string;
-  /** The trims of the picked vehicle that have this engine, comma-separated. */
-  trims: string;
-}
-
 /** "2.0 L 4-cyl turbo (K20T) — LX, EX": what the picker offers. */
-export function presentVehicleEngines(rows: VehicleEngineRecord[]): VehicleEnginesResponse {
+export function presentVehicleEngines(rows: VehicleEngineRow[]): VehicleEnginesResponse {
   return {
     engines: rows.map((r) => ({
       id: r.id,
@@ -40,22 +33,22 @@ export function presentVehicleEngines(rows: VehicleEngineRecord[]): VehicleEngin
 
 export interface FitmentRecord {
   row: PartRow;
-  spec: { coil?: CoilSpec; plug?: ResolvedPlugSpec } | undefined;
+  spec: PartSpecs | undefined;
   position: Fitment['position'];
   quantity: number;
-  stock: { onHand: number; bin: string };
+  stock: StockLevel;
   prices: PriceRow[];
 }
 
 export interface EngineDetailRecord {
-  engine: EngineEntity;
+  engine: EngineRecord;
   fitments: FitmentRecord[];
 }
 
 /** GET /api/engines/:id: the engine's spec and its fitted parts, stock and price as the role may see them. */
 export function presentEngineDetail(d: EngineDetailRecord, role: Role): EngineDetail {
   return {
-    engine: { id: d.engine.id, description: d.engine.description, systemVoltage: d.engine.systemVoltage, ...engineSpecOf(d.engine) },
+    engine: { id: d.engine.id, description: d.engine.description, systemVoltage: d.engine.systemVoltage, ...d.engine.spec },
     fitments: d.fitments.map((f) => ({
       part: presentPart(f.row),
       spec: presentSpec(f.spec),

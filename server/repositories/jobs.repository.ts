@@ -1,6 +1,6 @@
-import type { DataSource } from 'typeorm';
 import { z } from 'zod';
 import { JOB_NAMES, jobNameSchema, jobStateSchema } from '../../shared/schemas/jobs';
+import { queryOne, queryRows, type Executor } from '../db/executor';
 import { JOB_SCHEMA } from '../jobs/queue';
 
 /** How many problem jobs the Jobs page lists, newest first. */
@@ -27,17 +27,17 @@ const SELECT = `SELECT id, name, state::text AS state, data, retry_count, retry_
                   FROM ${JOB_SCHEMA}.job`;
 
 /** Our jobs that are waiting for another attempt or out of attempts, read from pg-boss's job table. */
-export async function listProblemJobs(ds: DataSource): Promise<JobRow[]> {
-  const rows: unknown = await ds.query(
+export function listProblemJobs(ex: Executor): Promise<JobRow[]> {
+  return queryRows(
+    ex,
+    jobRowSchema,
     `${SELECT} WHERE state IN ('retry', 'failed') AND name = ANY($1) ORDER BY created_on DESC, id LIMIT $2`,
     [JOB_NAMES, LIST_LIMIT],
   );
-  return z.array(jobRowSchema).parse(rows);
 }
 
-export async function findProblemJob(ds: DataSource, id: string): Promise<JobRow | null> {
-  const rows: unknown = await ds.query(`${SELECT} WHERE id = $1 AND state IN ('retry', 'failed') AND name = ANY($2)`, [id, JOB_NAMES]);
-  return z.array(jobRowSchema).parse(rows)[0] ?? null;
+export function findProblemJob(ex: Executor, id: string): Promise<JobRow | null> {
+  return queryOne(ex, jobRowSchema, `${SELECT} WHERE id = $1 AND state IN ('retry', 'failed') AND name = ANY($2)`, [id, JOB_NAMES]);
 }
 
 /** The states a queue's depth is told in: waiting, waiting to retry, running, out of attempts. */
@@ -46,11 +46,12 @@ const depthRowSchema = z.object({ name: jobNameSchema, state: z.enum(QUEUE_DEPTH
 export type QueueDepthRow = z.infer<typeof depthRowSchema>;
 
 /** Jobs per queue and state, for the metrics (completed jobs are not depth, and are many). */
-export async function countQueuedJobs(ds: DataSource): Promise<QueueDepthRow[]> {
-  const rows: unknown = await ds.query(
+export function countQueuedJobs(ex: Executor): Promise<QueueDepthRow[]> {
+  return queryRows(
+    ex,
+    depthRowSchema,
     `SELECT name, state::text AS state, count(*)::int AS jobs FROM ${JOB_SCHEMA}.job
       WHERE name = ANY($1) AND state::text = ANY($2) GROUP BY name, state`,
     [JOB_NAMES, QUEUE_DEPTH_STATES],
   );
-  return z.array(depthRowSchema).parse(rows);
 }

@@ -3,7 +3,7 @@ import { apiKeyIdParamSchema, createApiKeyBodySchema } from '../../shared/schema
 import type { AppDeps } from '../deps';
 import { currentUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
-import { presentApiKey, presentCreatedApiKey } from '../presenters/api-key.presenter';
+import { presentApiKeys, presentCreatedApiKey } from '../presenters/api-key.presenter';
 import { createApiKey, listApiKeys, revokeApiKey } from '../services/api-keys.service';
 import { mount } from './mount';
 
@@ -13,7 +13,7 @@ export function apiKeyRoutes(deps: AppDeps): Router {
   const ds = deps.dataSource;
 
   mount(r, 'GET /api/api-keys', async (_req, res) => {
-    res.json({ apiKeys: (await listApiKeys(ds)).map(presentApiKey) });
+    res.json(presentApiKeys(await listApiKeys(ds)));
   });
 
   mount(r, 'POST /api/api-keys', async (req, res) => {

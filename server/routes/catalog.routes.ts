@@ -13,13 +13,11 @@ import { presentInterchangeClaim } from '../presenters/interchange.presenter';
 import { presentPartDetail } from '../presenters/part.presenter';
 import { presentSearchResults } from '../presenters/search.presenter';
 import { presentEngineDetail, presentMakes, presentModels, presentVehicleEngines, presentYears } from '../presenters/vehicle.presenter';
-import { getBrand, listBrands } from '../services/catalog/brands.service';
+import { listBrands } from '../services/catalog/brands.service';
 import { CatalogEditService } from '../services/catalog/catalog-edit.service';
-import { getInterchangeClaim } from '../services/catalog/interchange.service';
 import { getEngineDetail, getPartDetail } from '../services/catalog/part-detail.service';
 import { listEngines, listMakes, listModels, listYears } from '../services/catalog/vehicles.service';
 import { searchParts } from '../services/search.service';
-import { getSettings } from '../services/settings.service';
 import { mount } from './mount';
 
 export function catalogRoutes(deps: AppDeps): Router {
@@ -49,14 +47,14 @@ export function catalogRoutes(deps: AppDeps): Router {
   });
 
   mount(r, 'GET /api/search', async (req, res) => {
-    const result = await searchParts(deps.search, parseQuery(searchQuerySchema, req), ds, (await getSettings(ds)).compat);
+    const result = await searchParts(deps.search, parseQuery(searchQuerySchema, req), ds);
     res.json(presentSearchResults(result, currentUser(req).role));
   });
 
   mount(r, 'GET /api/parts/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const { engineId } = parseQuery(partQuerySchema, req);
-    res.json(presentPartDetail(await getPartDetail(ds, id, (await getSettings(ds)).compat, engineId), currentUser(req).role));
+    res.json(presentPartDetail(await getPartDetail(ds, id, engineId), currentUser(req).role));
   });
 
   mount(r, 'GET /api/brands', async (_req, res) => {
@@ -65,29 +63,25 @@ export function catalogRoutes(deps: AppDeps): Router {
 
   mount(r, 'POST /api/brands', async (req, res) => {
     const body = parseBody(createBrandBodySchema, req);
-    const { id } = await edits.createBrand(currentUser(req).id, body);
-    res.status(201).json(presentCreatedBrand(await getBrand(ds, id)));
+    res.status(201).json(presentCreatedBrand(await edits.createBrand(currentUser(req).id, body)));
   });
 
   mount(r, 'POST /api/parts', async (req, res) => {
     const body = parseBody(createPartBodySchema, req);
     const user = currentUser(req);
-    const id = await edits.createPart(user.id, body);
-    res.status(201).json(presentPartDetail(await getPartDetail(ds, id, (await getSettings(ds)).compat), user.role));
+    res.status(201).json(presentPartDetail(await edits.createPart(user.id, body), user.role));
   });
 
   mount(r, 'PATCH /api/parts/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const body = parseBody(updatePartBodySchema, req);
     const user = currentUser(req);
-    await edits.updatePart(user.id, id, body);
-    res.json(presentPartDetail(await getPartDetail(ds, id, (await getSettings(ds)).compat), user.role));
+    res.json(presentPartDetail(await edits.updatePart(user.id, id, body), user.role));
   });
 
   mount(r, 'POST /api/interchange', async (req, res) => {
     const body = parseBody(createInterchangeBodySchema, req);
-    const id = await edits.createInterchange(currentUser(req).id, body);
-    res.status(201).json(presentInterchangeClaim(await getInterchangeClaim(ds, id)));
+    res.status(201).json(presentInterchangeClaim(await edits.createInterchange(currentUser(req).id, body)));
   });
 
   return r;

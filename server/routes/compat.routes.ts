@@ -12,7 +12,6 @@ import { presentCoilComparison, presentPlugComparison } from '../presenters/comp
 import { engineAlternates } from '../services/compat/alternates.service';
 import { runBenchTest } from '../services/compat/bench.service';
 import { compareCoilRequest, comparePlugRequest } from '../services/compat/compare.service';
-import { getSettings } from '../services/settings.service';
 import { mount } from './mount';
 
 export function compatRoutes(deps: AppDeps): Router {
@@ -21,25 +20,23 @@ export function compatRoutes(deps: AppDeps): Router {
 
   mount(r, 'POST /api/compat/coil', async (req, res) => {
     const body = parseBody(coilCompareBodySchema, req);
-    res.json(presentCoilComparison(await compareCoilRequest(ds, body, (await getSettings(ds)).compat)));
+    res.json(presentCoilComparison(await compareCoilRequest(ds, body)));
   });
 
   mount(r, 'POST /api/compat/plug', async (req, res) => {
     const body = parseBody(plugCompareBodySchema, req);
-    res.json(presentPlugComparison(await comparePlugRequest(ds, body, (await getSettings(ds)).compat)));
+    res.json(presentPlugComparison(await comparePlugRequest(ds, body)));
   });
 
   mount(r, 'GET /api/engines/:id/alternates', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    const q = parseQuery(alternatesQuerySchema, req);
-    const includeNoGo = q.all === '1' || q.all === 'true';
-    const ranked = await engineAlternates(ds, id, q.kind, includeNoGo, (await getSettings(ds)).compat);
+    const ranked = await engineAlternates(ds, id, parseQuery(alternatesQuerySchema, req));
     res.json(presentAlternates(ranked, currentUser(req).role));
   });
 
   mount(r, 'POST /api/bench/coil', async (req, res) => {
     const body = parseBody(benchBodySchema, req);
-    const { result, coil } = await runBenchTest(ds, body, (await getSettings(ds)).compat);
+    const { result, coil } = await runBenchTest(ds, body);
     res.json(presentBenchResult(result, coil));
   });
 

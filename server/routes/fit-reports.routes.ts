@@ -7,7 +7,6 @@ import { currentUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
 import { presentEmailSent, presentFitReportResponse, presentFitReports } from '../presenters/fit-report.presenter';
 import { FitReportService } from '../services/compat/fit-reports.service';
-import { getSettings } from '../services/settings.service';
 import { mount } from './mount';
 
 export function fitReportRoutes(deps: AppDeps): Router {
@@ -19,7 +18,7 @@ export function fitReportRoutes(deps: AppDeps): Router {
 
   mount(r, 'POST /api/fit-reports', async (req, res) => {
     const body = parseBody(fitReportBodySchema, req);
-    res.status(201).json(presentFitReportResponse(await reports().create(currentUser(req), body, (await getSettings(ds)).compat), base()));
+    res.status(201).json(presentFitReportResponse(await reports().create(currentUser(req), body), base()));
   });
 
   mount(r, 'GET /api/fit-reports', async (req, res) => {

@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { jobIdParamSchema } from '../../shared/schemas/jobs';
 import type { AppDeps } from '../deps';
 import { parseParams } from '../middleware/validate';
+import { presentJobs, presentRetriedJob } from '../presenters/job.presenter';
 import { listJobs, retryJob } from '../services/jobs.service';
 import { mount } from './mount';
 
@@ -11,12 +12,12 @@ export function jobsRoutes(deps: AppDeps): Router {
   const ds = deps.dataSource;
 
   mount(r, 'GET /api/jobs', async (_req, res) => {
-    res.json({ jobs: await listJobs(ds) });
+    res.json(presentJobs(await listJobs(ds)));
   });
 
   mount(r, 'POST /api/jobs/:id/retry', async (req, res) => {
     const { id } = parseParams(jobIdParamSchema, req);
-    res.json({ job: await retryJob(ds, deps.jobs, id) });
+    res.json(presentRetriedJob(await retryJob(ds, deps.jobs, id)));
   });
 
   return r;

@@ -19,24 +19,17 @@ import {
   presentPriceListHistory,
   presentRowErrors,
 } from '../presenters/price-list.presenter';
-import { commitPriceList } from '../services/price-list/commit';
-import { writeErrorsCsv } from '../services/price-list/errors-csv';
-import { enqueueCommitFollowUp } from '../services/price-list/follow-up';
+import { commitWithFollowUp } from '../services/price-list/commit';
+import { errorsCsvFileName, writeErrorsCsv } from '../services/price-list/errors-csv';
 import { discardPriceList, previewPriceList, uploadPriceList } from '../services/price-list/intake.service';
 import { getPriceList, listChanges, listPriceLists, listRowErrors } from '../services/price-list/queries';
 import { cleanFileName, receivePriceListUpload } from '../services/price-list/upload';
-import { getSettings } from '../services/settings.service';
 import { mount } from './mount';
 
 /** Supplier price-list intake: upload, preview, commit, discard, history. */
 export function priceListRoutes(deps: AppDeps): Router {
   const r = Router();
   const ds = deps.dataSource;
-
-  async function intakeSettings(): Promise<{ maxFileBytes: number; flagThresholdPct: number }> {
-    const { priceList } = await getSettings(ds);
-    return { maxFileBytes: Math.round(priceList.maxFileMb * 1024 * 1024), flagThresholdPct: priceList.flagThresholdPct };
-  }
 
   mount(r, 'GET /api/price-lists', async (req, res) => {
     const { rows, total } = await listPriceLists(ds, parseQuery(priceListHistoryQuerySchema, req));
@@ -45,8 +38,7 @@ export function priceListRoutes(deps: AppDeps): Router {
 
   // Processed inside the request; a concurrent GET /api/price-lists/:id (with the client's uploadId) shows the progress.
   mount(r, 'POST /api/price-lists', async (req, res) => {
-    const settings = await intakeSettings();
-    await receivePriceListUpload(req, res, settings.maxFileBytes);
+    const settings = await receivePriceListUpload(req, res, ds);
     const file = req.file;
     try {
       const fields = parseBody(uploadPriceListFieldsSchema, req);
@@ -87,12 +79,7 @@ export function priceListRoutes(deps: AppDeps): Router {
   mount(r, 'GET /api/price-lists/:id/errors.csv', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const list = await getPriceList(ds, id);
-    const base = list.file_name.replace(/\.[^.]*$/, '') || 'price-list';
-    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-    res.setHeader(
-      'Content-Disposition',
-      `attachment; filename="${base.replace(/[^\w.-]+/g, '_')}-rejected.csv"; filename*=UTF-8''${encodeURIComponent(`${base}-rejected.csv`)}`,
-    );
+    res.attachment(errorsCsvFileName(list.file_name));
     await writeErrorsCsv(ds, id, res);
     res.end();
   });
@@ -100,14 +87,12 @@ export function priceListRoutes(deps: AppDeps): Router {
   mount(r, 'POST /api/price-lists/:id/preview', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const body = parseBody(previewPriceListBodySchema, req);
-    res.json(presentPriceList(await previewPriceList(deps, { id, mapping: body.mapping, ...(await intakeSettings()) })));
+    res.json(presentPriceList(await previewPriceList(deps, { id, mapping: body.mapping })));
   });
 
   mount(r, 'POST /api/price-lists/:id/commit', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    await commitPriceList(ds, id, currentUser(req).id, (m) => enqueueCommitFollowUp(m, deps.jobs, id));
-    // The search index and the buyers' e-mail are queued with the commit: nothing after it can fail the request.
-    res.json(presentCommitted(await getPriceList(ds, id), []));
+    res.json(presentCommitted(await commitWithFollowUp(ds, deps.jobs, id, currentUser(req).id), []));
   });
 
   mount(r, 'POST /api/price-lists/:id/discard', async (req, res) => {

@@ -1,4 +1,6 @@
 import type { DataSource } from 'typeorm';
+import { readCaughtUp } from '../db/read-only';
+import { chainPartIds, documentRows, type DocumentRow } from '../repositories/search.repository';
 
 /**
  * One search document per part of ours: every normalised number that should lead to it (its own,
@@ -87,78 +89,6 @@ export const FACET_ATTRIBUTES = [
   'resistor',
 ];
 
-// Vehicles are folded to one label per make, model and engine with the year span, so a part that
-// fits 40 model years carries a few labels, not 40.
-const DOCUMENT_SQL = `
-WITH RECURSIVE chain AS (
-  SELECT p.id AS current_id, old.id AS old_id, old.part_number_norm AS old_norm, 1 AS depth
-    FROM part p JOIN part old ON old.superseded_by_id = p.id
-  UNION ALL
-  SELECT c.current_id, older.id, older.part_number_norm, c.depth + 1
-    FROM chain c JOIN part older ON older.superseded_by_id = c.old_id
-   WHERE c.depth < 20
-),
-veh AS (
-  SELECT f.part_id, array_agg(DISTINCT e.code) AS engine_codes,
-         array_agg(DISTINCT v.make || ' ' || v.model || ' ' || e.code || ' ' || v.y0 || '-' || v.y1) AS labels
-    FROM fitment f
-    JOIN engine e ON e.id = f.engine_id
-    JOIN (SELECT engine_id, make, model, min(year) AS y0, max(year) AS y1 FROM vehicle GROUP BY engine_id, make, model) v ON v.engine_id = e.id
-   GROUP BY f.part_id
-)
-SELECT p.id, b.name AS brand, p.part_number, p.part_number_norm, p.gtin, p.kind, p.description,
-       p.superseded_by_id IS NULL AS current,
-       (cs.part_id IS NOT NULL OR ps.part_id IS NOT NULL) AS has_spec,
-       coalesce(s.on_hand, 0) AS on_hand,
-       -- A foreign number that points at a superseded part leads on to the current one. Two
-       -- index lookups rather than one OR, which would scan the whole interchange table per part.
-       ARRAY(SELECT DISTINCT n FROM (
-               SELECT i.foreign_number_norm AS n FROM interchange i WHERE i.part_id = p.id
-               UNION ALL
-               SELECT i.foreign_number_norm FROM chain c JOIN interchange i ON i.part_id = c.old_id WHERE c.current_id = p.id) x) AS interchange_numbers,
-       coalesce((SELECT array_agg(DISTINCT c.old_norm) FROM chain c WHERE c.current_id = p.id), '{}') AS superseded_numbers,
-       coalesce(veh.engine_codes, '{}') AS engine_codes, coalesce(veh.labels, '{}') AS vehicles,
-       cs.architecture, cs.driver, cs.connector_pins, cs.connector_key, cs.primary_ohm_min, cs.primary_ohm_max,
-       ps.thread_mm, ps.reach_mm, ps.seat, ps.hex_mm, hc.heat_step, ps.resistor, ps.gap_mm
-  FROM part p
-  JOIN brand b ON b.id = p.brand_id AND b.ours
-  LEFT JOIN coil_spec cs ON cs.part_id = p.id
-  LEFT JOIN plug_spec ps ON ps.part_id = p.id
-  LEFT JOIN brand_heat_code hc ON hc.brand_id = p.brand_id AND hc.code = ps.heat_code
-  LEFT JOIN stock s ON s.part_id = p.id
-  LEFT JOIN veh ON veh.part_id = p.id
-`;
-
-interface DocumentRow {
-  id: string;
-  brand: string;
-  part_number: string;
-  part_number_norm: string;
-  gtin: string | null;
-  kind: 'coil' | 'plug';
-  description: string;
-  current: boolean;
-  has_spec: boolean;
-  on_hand: number;
-  interchange_numbers: string[];
-  superseded_numbers: string[];
-  engine_codes: string[];
-  vehicles: string[];
-  architecture: string | null;
-  driver: string | null;
-  connector_pins: number | null;
-  connector_key: string | null;
-  primary_ohm_min: number | null;
-  primary_ohm_max: number | null;
-  thread_mm: number | null;
-  reach_mm: number | null;
-  seat: string | null;
-  hex_mm: number | null;
-  heat_step: number | null;
-  resistor: boolean | null;
-  gap_mm: number | null;
-}
-
 /** A spec as words: the plain forms a clerk uses at the counter, for free-text search. */
 function specWords(r: DocumentRow): string {
   const words: (string | number | null | false)[] =
@@ -216,28 +146,15 @@ function toDocument(r: DocumentRow): PartDocument {
   };
 }
 
-/** Every document, or those of the given parts. */
+/**
+ * Every document, or those of the given parts. Read on a replica once it has every write committed
+ * before the call (the refresh after an edit must not index the part as it was), else the primary.
+ */
 export async function loadPartDocuments(ds: DataSource, partIds?: string[]): Promise<PartDocument[]> {
-  const sql = partIds ? `${DOCUMENT_SQL} WHERE p.id = ANY($1::uuid[])` : DOCUMENT_SQL;
-  const rows = (await ds.query(sql, partIds ? [partIds] : [])) as DocumentRow[];
-  return rows.map(toDocument);
+  return (await readCaughtUp(ds, (ex) => documentRows(ex, partIds))).map(toDocument);
 }
 
-/**
- * The parts whose documents a change to these parts touches: themselves, the parts they are
- * superseded by up the chain (whose supersededNumbers change) and those they supersede.
- */
-export async function affectedPartIds(ds: DataSource, partIds: string[]): Promise<string[]> {
-  const rows = (await ds.query(
-    `WITH RECURSIVE up AS (
-        SELECT id, superseded_by_id, 0 AS d FROM part WHERE id = ANY($1::uuid[])
-        UNION SELECT p.id, p.superseded_by_id, up.d + 1 FROM part p JOIN up ON p.id = up.superseded_by_id WHERE up.d < 20
-     ), down AS (
-        SELECT id, 0 AS d FROM part WHERE id = ANY($1::uuid[])
-        UNION SELECT p.id, down.d + 1 FROM part p JOIN down ON p.superseded_by_id = down.id WHERE down.d < 20
-     )
-     SELECT id FROM up UNION SELECT id FROM down`,
-    [partIds],
-  )) as { id: string }[];
-  return rows.map((r) => r.id);
+/** The parts whose documents a change to these parts touches (see chainPartIds), read as above. */
+export function affectedPartIds(ds: DataSource, partIds: string[]): Promise<string[]> {
+  return readCaughtUp(ds, (ex) => chainPartIds(ex, partIds));
 }

@@ -1,10 +1,18 @@
 import { createHash, randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
-import { IsNull } from 'typeorm';
 import type { CreateApiKeyBody } from '../../shared/schemas/api-keys';
-import { ApiKeyEntity } from '../entities';
+import type { ApiKeyEntity } from '../entities';
 import { AppError } from '../errors';
-import { audit } from './audit.service';
+import {
+  findApiKey,
+  findLiveKeyByHash,
+  insertApiKey,
+  listApiKeys as keyRows,
+  liveKeyNamed,
+  markRevoked,
+  touchLastUsed,
+} from '../repositories/api-keys.repository';
+import { audit } from '../repositories/audit.repository';
 
 /** Marks the text as an Arcwise key, so a leaked one is recognisable in logs and secret scanners. */
 const KEY_MARK = 'arc_';
@@ -25,21 +33,15 @@ export async function createApiKey(
 ): Promise<{ entity: ApiKeyEntity; key: string }> {
   const key = `${KEY_MARK}${randomBytes(32).toString('base64url')}`;
   const entity = await ds.transaction(async (m) => {
-    const live = await m
-      .createQueryBuilder(ApiKeyEntity, 'k')
-      .where('lower(k.name) = lower(:name) AND k.revoked_at IS NULL', { name: body.name })
-      .getExists();
-    if (live) throw AppError.conflict(`A key named “${body.name}” exists already: revoke it first or choose another name.`);
-    const saved = await m.save(
-      ApiKeyEntity,
-      m.create(ApiKeyEntity, {
-        name: body.name,
-        scope: body.scope,
-        keyHash: hashKey(key),
-        prefix: key.slice(0, PREFIX_CHARS),
-        createdBy: actorId,
-      }),
-    );
+    if (await liveKeyNamed(m, body.name))
+      throw AppError.conflict(`A key named “${body.name}” exists already: revoke it first or choose another name.`);
+    const saved = await insertApiKey(m, {
+      name: body.name,
+      scope: body.scope,
+      keyHash: hashKey(key),
+      prefix: key.slice(0, PREFIX_CHARS),
+      createdBy: actorId,
+    });
     await audit(m, {
       actorId,
       action: 'api-key.create',
@@ -52,19 +54,17 @@ export async function createApiKey(
   return { entity, key };
 }
 
-export async function listApiKeys(ds: DataSource): Promise<ApiKeyEntity[]> {
-  return ds
-    .getRepository(ApiKeyEntity)
-    .find({ relations: { creator: true }, order: { revokedAt: { direction: 'DESC', nulls: 'FIRST' }, createdAt: 'DESC' } });
+export function listApiKeys(ds: DataSource): Promise<ApiKeyEntity[]> {
+  return keyRows(ds.manager);
 }
 
 /** Revoking is final: the key is refused from its next call on. Revoking a revoked key changes nothing. */
 export async function revokeApiKey(ds: DataSource, actorId: string, id: string): Promise<void> {
   await ds.transaction(async (m) => {
-    const key = await m.findOneBy(ApiKeyEntity, { id });
+    const key = await findApiKey(m, id);
     if (!key) throw AppError.notFound('API key');
     if (key.revokedAt) return;
-    await m.update(ApiKeyEntity, { id }, { revokedAt: () => 'now()' });
+    await markRevoked(m, id);
     await audit(m, { actorId, action: 'api-key.revoke', entityType: 'api_key', entityId: id, data: { name: key.name } });
   });
 }
@@ -72,7 +72,7 @@ export async function revokeApiKey(ds: DataSource, actorId: string, id: string):
 /** The live key a caller presented, or null for an unknown or revoked one. */
 export async function findLiveKey(ds: DataSource, presented: string): Promise<ApiKeyEntity | null> {
   if (!presented.startsWith(KEY_MARK)) return null;
-  return ds.getRepository(ApiKeyEntity).findOneBy({ keyHash: hashKey(presented), revokedAt: IsNull() });
+  return findLiveKeyByHash(ds.manager, hashKey(presented));
 }
 
 export interface KeyCall {
@@ -94,10 +94,7 @@ export function recordKeyCall(ds: DataSource, key: Pick<ApiKeyEntity, 'id' | 'na
       entityId: key.id,
       data: { key: key.name, method: call.method, path: call.path.slice(0, 500), status: call.status },
     });
-    await ds.query(
-      `UPDATE api_key SET last_used_at = now() WHERE id = $1 AND (last_used_at IS NULL OR last_used_at < now() - interval '1 minute')`,
-      [key.id],
-    );
+    await touchLastUsed(ds.manager, key.id);
   })();
   recording.add(write);
   void write.finally(() => recording.delete(write)).catch(() => undefined);

@@ -1,13 +1,8 @@
 import type { DataSource } from 'typeorm';
 import { INVITE_TTL_HOURS } from '../../shared/schemas/auth';
 import { escapeHtml, type OutgoingMail } from '../mail/mailer';
+import { reissueInvitationToken } from '../repositories/invitations.repository';
 import { inviteTokenHash, newInviteToken } from './invite-token';
-
-interface InviteeRow {
-  email: string;
-  name: string;
-  role: string;
-}
 
 /**
  * The invitation e-mail, rendered by the mail job. The link's token is issued here and only its
@@ -17,13 +12,7 @@ interface InviteeRow {
  */
 export async function issueInvitationMail(ds: DataSource, invitationId: string, appUrl: string): Promise<OutgoingMail | null> {
   const token = newInviteToken();
-  const rows = (await ds.query(
-    `UPDATE invitation i SET token_hash = $2 FROM "user" u
-      WHERE i.id = $1 AND u.id = i.user_id AND i.used_at IS NULL AND i.expires_at > now()
-      RETURNING u.email, u.name, u.role`,
-    [invitationId, inviteTokenHash(token)],
-  )) as [InviteeRow[], number];
-  const invitee = rows[0][0];
+  const invitee = await reissueInvitationToken(ds.manager, invitationId, inviteTokenHash(token));
   if (!invitee) return null;
   const link = `${appUrl}/accept-invite?token=${encodeURIComponent(token)}`;
   return {

@@ -1,51 +1,45 @@
 import type { DataSource } from 'typeorm';
 import type { CompatSettings } from '../../shared/compat';
 import { looksLikePartNumber, normalizePartNumber } from '../../shared/part-number';
-import type { SearchHit, SearchQuery, SearchResponse } from '../../shared/schemas/search';
+import { FACET_FIELDS, type SearchHit, type SearchQuery, type SearchResponse } from '../../shared/schemas/search';
 import { PART_KINDS, type PartKind } from '../../shared/schemas/specs';
-import { exactNumberHits } from '../search/exact-number';
-import { FACET_ATTRIBUTES } from '../search/part-document';
-import { FACET_FIELDS } from '../../shared/schemas/search';
-import { buildFilters } from '../search/filters';
-import type { PartSearchIndex } from '../search/search-index';
+import { readOnly } from '../db/read-only';
 import { presentInterchangeCheck } from '../presenters/part.presenter';
 import { presentSearchHit } from '../presenters/search.presenter';
+import { claimOriginals } from '../repositories/interchange.repository';
+import { exactNumberHits } from '../search/exact-number';
+import { buildFilters } from '../search/filters';
+import { FACET_ATTRIBUTES } from '../search/part-document';
+import type { PartSearchIndex } from '../search/search-index';
 import { interchangeVerdict } from './compat/interchange-verdict.service';
+import { getSettings } from './settings.service';
 
-/**
- * The Counter's one search box: a number (ours, another brand's, a superseded one — with dashes,
- * spaces, any case, a typo), a scanned GTIN, or free text; plus the spec facets.
- * A number is searched in its normalised form first; free text when that finds nothing.
- */
 /** Interchange hits carry the verdict of the claim, so a wrong row shows as no-go at the counter. */
 async function withInterchangeChecks(ds: DataSource, hits: SearchHit[], settings: CompatSettings, engineId?: string): Promise<SearchHit[]> {
   const claims = hits.filter((h) => h.matchedBy === 'interchange' && h.matchedNumber);
   if (!claims.length) return hits;
-  // One query for every claim's foreign part (where the catalog holds its spec).
-  const rows = (await ds.query(
-    `SELECT i.part_id, i.foreign_number_norm, fp.id AS original_part_id
-       FROM interchange i JOIN brand fb ON lower(fb.name) = lower(i.foreign_brand)
-       JOIN part fp ON fp.brand_id = fb.id AND fp.part_number_norm = i.foreign_number_norm
-      WHERE i.part_id = ANY($1::uuid[]) AND i.foreign_number_norm = ANY($2::text[])`,
-    [claims.map((h) => h.partId), claims.map((h) => h.matchedNumber)],
-  )) as { part_id: string; foreign_number_norm: string; original_part_id: string }[];
-  const originals = new Map(rows.map((r) => [`${r.part_id}|${r.foreign_number_norm}`, r.original_part_id]));
-  return Promise.all(
-    hits.map(async (h) => {
-      const originalPartId = h.matchedBy === 'interchange' ? originals.get(`${h.partId}|${h.matchedNumber}`) : undefined;
-      if (!originalPartId || !h.matchedNumber) return h;
-      const check = await interchangeVerdict(
-        ds,
-        { foreignNumberNorm: h.matchedNumber, originalPartId, partId: h.partId },
-        settings,
-        engineId,
-      );
-      return {
-        ...h,
-        check: check && presentInterchangeCheck(check),
-      };
-    }),
-  );
+  return readOnly(ds, async (ex) => {
+    // One query for every claim's foreign part (where the catalog holds its spec).
+    const rows = await claimOriginals(
+      ex,
+      claims.map((h) => h.partId),
+      claims.map((h) => h.matchedNumber ?? ''),
+    );
+    const originals = new Map(rows.map((r) => [`${r.part_id}|${r.foreign_number_norm}`, r.original_part_id]));
+    return Promise.all(
+      hits.map(async (h) => {
+        const originalPartId = h.matchedBy === 'interchange' ? originals.get(`${h.partId}|${h.matchedNumber}`) : undefined;
+        if (!originalPartId || !h.matchedNumber) return h;
+        const check = await interchangeVerdict(
+          ex,
+          { foreignNumberNorm: h.matchedNumber, originalPartId, partId: h.partId },
+          settings,
+          engineId,
+        );
+        return { ...h, check: check && presentInterchangeCheck(check) };
+      }),
+    );
+  });
 }
 
 /** How a kind is said at the counter: "pencil coil", "iridium spark plug". */
@@ -63,18 +57,20 @@ function kindFromWords(raw: string, kind: PartKind | undefined): { words: string
   return words ? { words, kind: named[0] } : { words: raw, kind };
 }
 
-export async function searchParts(
-  index: PartSearchIndex,
-  query: SearchQuery,
-  ds: DataSource,
-  settings: CompatSettings,
-): Promise<SearchResponse> {
+/**
+ * The Counter's one search box: a number (ours, another brand's, a superseded one — with dashes,
+ * spaces, any case, a typo), a scanned GTIN, or free text; plus the spec facets.
+ * A number is looked up exactly in PostgreSQL first (read-only work, on a replica where there is
+ * one); the search index answers typos and free text.
+ */
+export async function searchParts(index: PartSearchIndex, query: SearchQuery, ds: DataSource): Promise<SearchResponse> {
+  const { compat } = await getSettings(ds);
   const raw = query.q.trim();
   const numberLike = looksLikePartNumber(raw);
   const filtered = query.kind !== undefined || FACET_FIELDS.some((f) => query[f] !== undefined);
   if (numberLike && !filtered && query.offset === 0) {
-    const exact = await exactNumberHits(ds, normalizePartNumber(raw), query.limit);
-    if (exact.length) return { hits: await withInterchangeChecks(ds, exact, settings, query.engineId), total: exact.length, facets: {} };
+    const exact = await readOnly(ds, (ex) => exactNumberHits(ex, normalizePartNumber(raw), query.limit));
+    if (exact.length) return { hits: await withInterchangeChecks(ds, exact, compat, query.engineId), total: exact.length, facets: {} };
   }
   const said = numberLike ? { words: raw, kind: query.kind } : kindFromWords(raw, query.kind);
   // Facet counts cost a pass over every match: only when the filter controls ask for them.
@@ -94,7 +90,7 @@ export async function searchParts(
     hits: await withInterchangeChecks(
       ds,
       res.hits.map((d) => presentSearchHit(d, raw)),
-      settings,
+      compat,
       query.engineId,
     ),
     total: res.estimatedTotalHits ?? res.hits.length,

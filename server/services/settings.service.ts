@@ -1,15 +1,20 @@
 import type { DataSource } from 'typeorm';
 import { DEFAULT_SETTINGS, settingsSchema, type Settings } from '../../shared/schemas/settings';
-import { audit } from './audit.service';
+import { audit } from '../repositories/audit.repository';
+import { readStoredSettings, SETTINGS_KEY, writeSettings } from '../repositories/settings.repository';
 
-const KEY = 'app';
-/** Settings are read on every comparison; a few seconds of caching spares a query per request. */
+/**
+ * Settings are read on every comparison, search and price-list intake, so each app server keeps
+ * them in memory. A save here drops this server's copy at once; another server's copy lives at
+ * most this long, so a change reaches every server within a few seconds without a connection of
+ * its own to listen on.
+ */
 const CACHE_MS = 5_000;
 const cache = new WeakMap<DataSource, { at: number; value: Settings }>();
 
 /**
- * The admin's settings, stored as one JSON document; anything not stored falls back to the
- * defaults of shared/, so a new threshold needs no data migration.
+ * The admin's settings — the one way anything reads them. Stored as one JSON document; anything
+ * not stored falls back to the defaults of shared/, so a new threshold needs no data migration.
  */
 export async function getSettings(ds: DataSource): Promise<Settings> {
   const hit = cache.get(ds);
@@ -20,8 +25,7 @@ export async function getSettings(ds: DataSource): Promise<Settings> {
 }
 
 async function readSettings(ds: DataSource): Promise<Settings> {
-  const rows = (await ds.query(`SELECT value FROM setting WHERE key = $1`, [KEY])) as { value: Partial<Settings> }[];
-  const stored = rows[0]?.value ?? {};
+  const stored = await readStoredSettings(ds.manager);
   const merged = {
     compat: {
       ...DEFAULT_SETTINGS.compat,
@@ -34,14 +38,23 @@ async function readSettings(ds: DataSource): Promise<Settings> {
   return parsed.success ? parsed.data : DEFAULT_SETTINGS;
 }
 
+/** PUT /api/settings: saved with its audit row, and this server's cached copy dropped. */
 export async function saveSettings(ds: DataSource, actorId: string, settings: Settings): Promise<Settings> {
   await ds.transaction(async (m) => {
-    await m.query(
-      `INSERT INTO setting (key, value, updated_at) VALUES ($1, $2, now()) ON CONFLICT (key) DO UPDATE SET value = EXCLUDED.value, updated_at = now()`,
-      [KEY, JSON.stringify(settings)],
-    );
-    await audit(m, { actorId, action: 'settings.update', entityType: 'setting', entityId: KEY, data: { settings } });
+    await writeSettings(m, settings);
+    await audit(m, { actorId, action: 'settings.update', entityType: 'setting', entityId: SETTINGS_KEY, data: { settings } });
   });
   cache.delete(ds);
   return getSettings(ds);
+}
+
+/** What the price-list intake takes from the settings: the file size limit in bytes and the flag threshold. */
+export interface IntakeSettings {
+  maxFileBytes: number;
+  flagThresholdPct: number;
+}
+
+export async function intakeSettings(ds: DataSource): Promise<IntakeSettings> {
+  const { priceList } = await getSettings(ds);
+  return { maxFileBytes: Math.round(priceList.maxFileMb * 1024 * 1024), flagThresholdPct: priceList.flagThresholdPct };
 }

@@ -1,16 +1,15 @@
-import type { DataSource, EntityManager } from 'typeorm';
+import type { DataSource } from 'typeorm';
 import type { CreateSupplierBody, UpdateSupplierBody } from '../../shared/schemas/suppliers';
+import type { Executor } from '../db/executor';
 import { AppError } from '../errors';
-import type { SupplierRecord } from '../presenters/supplier.presenter';
-import { audit } from './audit.service';
-
-const SUPPLIER_SELECT = `
-SELECT s.id, s.key, s.name, s.contact_email, s.phone, s.mapping, s.created_at, last.id AS last_id, last.committed_at AS last_at
-  FROM supplier s
-  LEFT JOIN LATERAL (
-    SELECT pl.id, pl.committed_at FROM price_list pl
-     WHERE pl.supplier_id = s.id AND pl.status = 'committed' ORDER BY pl.committed_at DESC LIMIT 1
-  ) last ON true`;
+import { audit } from '../repositories/audit.repository';
+import {
+  findSupplier,
+  insertSupplier,
+  listSupplierRows,
+  updateSupplierFields,
+  type SupplierRow,
+} from '../repositories/suppliers.repository';
 
 /** "Brackwater Trade Supply" → "brackwater-trade-supply": the key when the buyer gives none. */
 export function supplierKeyFromName(name: string): string {
@@ -25,10 +24,10 @@ export function supplierKeyFromName(name: string): string {
   return slug || 'supplier';
 }
 
-async function one(m: EntityManager | DataSource, id: string): Promise<SupplierRecord> {
-  const rows = (await m.query(`${SUPPLIER_SELECT} WHERE s.id = $1`, [id])) as SupplierRecord[];
-  if (!rows[0]) throw AppError.notFound('Supplier');
-  return rows[0];
+async function one(ex: Executor, id: string): Promise<SupplierRow> {
+  const row = await findSupplier(ex, id);
+  if (!row) throw AppError.notFound('Supplier');
+  return row;
 }
 
 function refuseDuplicate(err: unknown): never {
@@ -40,55 +39,29 @@ function refuseDuplicate(err: unknown): never {
   throw err;
 }
 
-export async function listSuppliers(ds: DataSource): Promise<SupplierRecord[]> {
-  return (await ds.query(`${SUPPLIER_SELECT} ORDER BY s.name`)) as SupplierRecord[];
+export function listSuppliers(ds: DataSource): Promise<SupplierRow[]> {
+  return listSupplierRows(ds.manager);
 }
 
-export async function createSupplier(ds: DataSource, actorId: string, body: CreateSupplierBody): Promise<SupplierRecord> {
+export async function createSupplier(ds: DataSource, actorId: string, body: CreateSupplierBody): Promise<SupplierRow> {
   return ds
     .transaction(async (m) => {
-      const rows = (await m.query(`INSERT INTO supplier (key, name, contact_email, phone) VALUES ($1, $2, $3, $4) RETURNING id`, [
-        body.key ?? supplierKeyFromName(body.name),
-        body.name,
-        body.contactEmail ?? null,
-        body.phone ?? null,
-      ])) as { id: string }[];
-      const id = rows[0]?.id;
-      if (!id) throw new Error('supplier insert returned no id');
+      const id = await insertSupplier(m, {
+        key: body.key ?? supplierKeyFromName(body.name),
+        name: body.name,
+        contactEmail: body.contactEmail ?? null,
+        phone: body.phone ?? null,
+      });
       await audit(m, { actorId, action: 'supplier.create', entityType: 'supplier', entityId: id, data: { name: body.name } });
       return one(m, id);
     })
     .catch(refuseDuplicate);
 }
 
-const COLUMN_OF: Record<Exclude<keyof UpdateSupplierBody, 'mapping'>, string> = {
-  key: 'key',
-  name: 'name',
-  contactEmail: 'contact_email',
-  phone: 'phone',
-};
-
-export async function updateSupplier(ds: DataSource, actorId: string, id: string, body: UpdateSupplierBody): Promise<SupplierRecord> {
+export async function updateSupplier(ds: DataSource, actorId: string, id: string, body: UpdateSupplierBody): Promise<SupplierRow> {
   return ds
     .transaction(async (m) => {
-      const sets: string[] = [];
-      const args: unknown[] = [id];
-      for (const [field, column] of Object.entries(COLUMN_OF) as [keyof typeof COLUMN_OF, string][]) {
-        const value = body[field];
-        if (value === undefined) continue;
-        args.push(value);
-        sets.push(`${column} = $${args.length}`);
-      }
-      if (body.mapping !== undefined) {
-        args.push(body.mapping === null ? null : JSON.stringify(body.mapping));
-        sets.push(`mapping = $${args.length}`);
-      }
-      // Wrapped in a SELECT: TypeORM answers a bare UPDATE … RETURNING with [rows, count].
-      const rows = (await m.query(
-        `WITH upd AS (UPDATE supplier SET ${sets.join(', ')} WHERE id = $1 RETURNING id) SELECT id FROM upd`,
-        args,
-      )) as unknown[];
-      if (rows.length === 0) throw AppError.notFound('Supplier');
+      if (!(await updateSupplierFields(m, id, body))) throw AppError.notFound('Supplier');
       await audit(m, { actorId, action: 'supplier.update', entityType: 'supplier', entityId: id, data: { fields: Object.keys(body) } });
       return one(m, id);
     })

@@ -1,22 +1,33 @@
 import type { DataSource } from 'typeorm';
-import { IsNull } from 'typeorm';
 import { passwordProblem } from '../../shared/password-policy';
 import { INVITE_TTL_HOURS, type AcceptInviteBody } from '../../shared/schemas/auth';
 import { type InviteBody, type UpdateUserBody } from '../../shared/schemas/users';
-import { InvitationEntity, ShopEntity, UserEntity } from '../entities';
+import type { InvitationEntity, ShopEntity, UserEntity } from '../entities';
 import { AppError } from '../errors';
 import type { JobQueue } from '../jobs/queue';
-import { audit } from './audit.service';
+import { audit } from '../repositories/audit.repository';
+import { claimInvitation, findUnusedInvitation, insertInvitation } from '../repositories/invitations.repository';
+import {
+  findShop,
+  findUser,
+  findUserByEmail,
+  findUserWithShop,
+  insertUser,
+  listShops as shopRows,
+  listUsers as userRows,
+  setPasswordHash,
+  updateUserAccess,
+} from '../repositories/users.repository';
 import { endSessionsOf } from './auth.service';
 import { inviteTokenHash, newInviteToken } from './invite-token';
 import { hashPassword } from './password';
 
-export async function listUsers(ds: DataSource): Promise<UserEntity[]> {
-  return ds.getRepository(UserEntity).find({ relations: { shop: true }, order: { role: 'ASC', name: 'ASC' } });
+export function listUsers(ds: DataSource): Promise<UserEntity[]> {
+  return userRows(ds.manager);
 }
 
-export async function listShops(ds: DataSource): Promise<ShopEntity[]> {
-  return ds.getRepository(ShopEntity).find({ order: { name: 'ASC' } });
+export function listShops(ds: DataSource): Promise<ShopEntity[]> {
+  return shopRows(ds.manager);
 }
 
 /**
@@ -33,19 +44,18 @@ export async function inviteUser(
 ): Promise<{ user: UserEntity; expiresAt: Date }> {
   const expiresAt = new Date(Date.now() + INVITE_TTL_HOURS * 3600 * 1000);
   const user = await ds.transaction(async (m) => {
-    if (await m.findOneBy(UserEntity, { email: body.email })) {
+    if (await findUserByEmail(m, body.email)) {
       throw AppError.conflict(`${body.email} already has an account.`);
     }
     const shopId = body.role === 'technician' ? (body.shopId ?? null) : null;
-    if (shopId && !(await m.findOneBy(ShopEntity, { id: shopId }))) throw AppError.badRequest('shopId: no such shop');
-    const created = await m.save(
-      UserEntity,
-      m.create(UserEntity, { email: body.email, name: body.name, role: body.role, shopId, passwordHash: null }),
-    );
-    const invitation = await m.save(
-      InvitationEntity,
-      m.create(InvitationEntity, { userId: created.id, tokenHash: inviteTokenHash(newInviteToken()), expiresAt, invitedBy: actorId }),
-    );
+    if (shopId && !(await findShop(m, shopId))) throw AppError.badRequest('shopId: no such shop');
+    const created = await insertUser(m, { email: body.email, name: body.name, role: body.role, shopId });
+    const invitation = await insertInvitation(m, {
+      userId: created.id,
+      tokenHash: inviteTokenHash(newInviteToken()),
+      expiresAt,
+      invitedBy: actorId,
+    });
     await audit(m, {
       actorId,
       action: 'user.invite',
@@ -60,43 +70,43 @@ export async function inviteUser(
 }
 
 async function findOpenInvitation(ds: DataSource, token: string): Promise<InvitationEntity> {
-  const inv = await ds.getRepository(InvitationEntity).findOneBy({ tokenHash: inviteTokenHash(token), usedAt: IsNull() });
+  const inv = await findUnusedInvitation(ds.manager, inviteTokenHash(token));
   if (!inv || inv.expiresAt.getTime() < Date.now()) {
     throw new AppError(400, 'bad_request', 'This invitation link is invalid, used or expired. Ask an admin for a new one.');
   }
   return inv;
 }
 
+async function invitedUser(ds: DataSource, inv: InvitationEntity): Promise<UserEntity> {
+  const user = await findUser(ds.manager, inv.userId);
+  if (!user) throw new Error(`invitation ${inv.id} has no user`);
+  return user;
+}
+
 export async function describeInvitation(ds: DataSource, token: string): Promise<{ email: string; name: string }> {
-  const inv = await findOpenInvitation(ds, token);
-  const user = await ds.getRepository(UserEntity).findOneByOrFail({ id: inv.userId });
+  const user = await invitedUser(ds, await findOpenInvitation(ds, token));
   return { email: user.email, name: user.name };
 }
 
 export async function acceptInvite(ds: DataSource, body: AcceptInviteBody): Promise<UserEntity> {
   const inv = await findOpenInvitation(ds, body.token);
-  const invited = await ds.getRepository(UserEntity).findOneByOrFail({ id: inv.userId });
+  const invited = await invitedUser(ds, inv);
   const problem = passwordProblem(body.password, invited.email);
   if (problem) throw new AppError(400, 'validation_failed', `password: ${problem}`, [{ field: 'password', message: problem }]);
   const passwordHash = await hashPassword(body.password);
   return ds.transaction(async (m) => {
-    // Marking it used in the same statement that checks it keeps a double submit from using it twice.
-    const claimed = await m
-      .createQueryBuilder()
-      .update(InvitationEntity)
-      .set({ usedAt: () => 'now()' })
-      .where('id = :id AND used_at IS NULL', { id: inv.id })
-      .execute();
-    if (claimed.affected !== 1) throw AppError.badRequest('This invitation link was already used.');
-    await m.update(UserEntity, { id: inv.userId }, { passwordHash });
+    if (!(await claimInvitation(m, inv.id))) throw AppError.badRequest('This invitation link was already used.');
+    await setPasswordHash(m, inv.userId, passwordHash);
     await audit(m, { actorId: inv.userId, action: 'user.accept-invite', entityType: 'user', entityId: inv.userId });
-    return m.findOneByOrFail(UserEntity, { id: inv.userId });
+    const user = await findUser(m, inv.userId);
+    if (!user) throw AppError.notFound('User');
+    return user;
   });
 }
 
 export async function updateUser(ds: DataSource, actorId: string, id: string, body: UpdateUserBody): Promise<UserEntity> {
   const user = await ds.transaction(async (m) => {
-    const u = await m.findOne(UserEntity, { where: { id }, relations: { shop: true } });
+    const u = await findUserWithShop(m, id);
     if (!u) throw AppError.notFound('User');
     if (id === actorId && (body.disabled === true || (body.role && body.role !== 'admin'))) {
       throw AppError.badRequest('You cannot disable yourself or drop your own admin role.');
@@ -104,9 +114,11 @@ export async function updateUser(ds: DataSource, actorId: string, id: string, bo
     const role = body.role ?? u.role;
     const shopId = role === 'technician' ? (body.shopId ?? u.shopId) : null;
     if (role === 'technician' && !shopId) throw AppError.badRequest('shopId: a technician belongs to a shop');
-    await m.update(UserEntity, { id }, { role, shopId, disabled: body.disabled ?? u.disabled });
+    await updateUserAccess(m, id, { role, shopId, disabled: body.disabled ?? u.disabled });
     await audit(m, { actorId, action: 'user.update', entityType: 'user', entityId: id, data: { ...body } });
-    return m.findOneOrFail(UserEntity, { where: { id }, relations: { shop: true } });
+    const updated = await findUserWithShop(m, id);
+    if (!updated) throw AppError.notFound('User');
+    return updated;
   });
   // A disabled user, or one whose rights changed, signs in again.
   if (body.disabled === true || body.role !== undefined) await endSessionsOf(ds, id);

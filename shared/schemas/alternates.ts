@@ -10,6 +10,7 @@ export const alternatesQuerySchema = z.object({
   /** Include the no-go candidates too. */
   all: z.enum(['1', 'true', '0', 'false']).optional(),
 });
+export type AlternatesQuery = z.infer<typeof alternatesQuerySchema>;
 
 export const alternateSchema = z
   .object({

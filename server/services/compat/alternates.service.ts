@@ -1,45 +1,47 @@
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import { prepareCoilComparison, preparePlugComparison, rankAlternates, type CompatSettings, type Verdict } from '../../../shared/compat';
 import type { Check } from '../../../shared/compat';
+import type { AlternatesQuery } from '../../../shared/schemas/alternates';
 import type { CoilSpec, ResolvedPlugSpec } from '../../../shared/schemas/specs';
+import { readOnly } from '../../db/read-only';
 import { AppError } from '../../errors';
 import type { AlternatesRecord } from '../../presenters/alternates.presenter';
 import { sellPriceRow } from '../../presenters/stock-price.presenter';
-import { engineSpecOf, loadEngine, loadPartRows, loadPrices, loadSpecs, loadStock } from '../catalog/part-loader';
+import { findEngine, fittedPartId } from '../../repositories/engines.repository';
+import { currentSpecPartIds, findPartRows } from '../../repositories/parts.repository';
+import { pricesOf } from '../../repositories/prices.repository';
+import { findSpecs } from '../../repositories/specs.repository';
+import { stockOf } from '../../repositories/stock.repository';
+import { getSettings } from '../settings.service';
 import { asBadRequest } from './compare.service';
-import { fittedPartId } from './resolve';
-
-/** Our current parts of a kind that carry a spec: the candidates a clerk could offer. */
-async function candidateIds(ds: DataSource, kind: 'coil' | 'plug', exceptId: string): Promise<string[]> {
-  const specTable = kind === 'coil' ? 'coil_spec' : 'plug_spec';
-  const rows = (await ds.query(
-    `SELECT p.id FROM part p JOIN brand b ON b.id = p.brand_id AND b.ours JOIN ${specTable} s ON s.part_id = p.id
-      WHERE p.kind = $1 AND p.superseded_by_id IS NULL AND p.status = 'active' AND p.id <> $2`,
-    [kind, exceptId],
-  )) as { id: string }[];
-  return rows.map((r) => r.id);
-}
 
 /**
- * The alternates for an engine's fitted coil or plug, ranked as compat-model.md §7 says: every
- * candidate judged against the fitted part on this engine, no-go ones only on request.
+ * GET /api/engines/:id/alternates: the alternates for an engine's fitted coil or plug, ranked as
+ * compat-model.md §7 says — every candidate judged against the fitted part on this engine, no-go
+ * ones only on request (`all`). Read-only work, on a replica where there is one.
  */
-export async function engineAlternates(
-  ds: DataSource,
+export async function engineAlternates(ds: DataSource, engineId: string, query: AlternatesQuery): Promise<AlternatesRecord> {
+  const { compat } = await getSettings(ds);
+  const includeNoGo = query.all === '1' || query.all === 'true';
+  return readOnly(ds, (ex) => rankFor(ex, engineId, query.kind, includeNoGo, compat));
+}
+
+async function rankFor(
+  ex: EntityManager,
   engineId: string,
   kind: 'coil' | 'plug',
   includeNoGo: boolean,
   settings: CompatSettings,
 ): Promise<AlternatesRecord> {
-  const engine = await loadEngine(ds, engineId);
+  const engine = await findEngine(ex, engineId);
   if (!engine) throw AppError.notFound('Engine');
-  const engineSpec = engineSpecOf(engine);
-  const originalId = await fittedPartId(ds, engineId, kind);
+  const engineSpec = engine.spec;
+  const originalId = await fittedPartId(ex, engineId, kind);
   if (!originalId) return { original: null, alternates: [] };
-  const ids = await candidateIds(ds, kind, originalId);
-  const specs = await loadSpecs(ds, [originalId, ...ids]);
+  const ids = await currentSpecPartIds(ex, kind, originalId);
+  const specs = await findSpecs(ex, [originalId, ...ids]);
   const originalSpec = specs.get(originalId);
-  const [rows, stock, prices] = await Promise.all([loadPartRows(ds, [originalId, ...ids]), loadStock(ds, ids), loadPrices(ds, ids)]);
+  const [rows, stock, prices] = await Promise.all([findPartRows(ex, [originalId, ...ids]), stockOf(ex, ids), pricesOf(ex, ids)]);
   const original = rows.get(originalId)!;
   if (!originalSpec?.coil && !originalSpec?.plug) return { original, alternates: [] };
 
@@ -54,8 +56,8 @@ export async function engineAlternates(
     };
     explain = (id) => comparer.compare(specs.get(id)!.coil!, { curves: false }).checks;
   } else {
-    const coilId = await fittedPartId(ds, engineId, 'coil');
-    const coil = coilId ? (await loadSpecs(ds, [coilId])).get(coilId)?.coil : undefined;
+    const coilId = await fittedPartId(ex, engineId, 'coil');
+    const coil = coilId ? (await findSpecs(ex, [coilId])).get(coilId)?.coil : undefined;
     if (!coil) return { original, alternates: [] };
     const comparer = asBadRequest(() =>
       preparePlugComparison({ original: originalSpec.plug as ResolvedPlugSpec, engine: engineSpec, coil, settings }),

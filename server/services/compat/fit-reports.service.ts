@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
-import { checkLabel, type CompatSettings } from '../../../shared/compat';
+import { checkLabel } from '../../../shared/compat';
 import type { User } from '../../../shared/schemas/auth';
 import { CAUTIONS } from '../../../shared/schemas/compat';
 import type { FitReportBody } from '../../../shared/schemas/fit-reports';
@@ -8,13 +8,21 @@ import { AppError } from '../../errors';
 import type { JobQueue } from '../../jobs/queue';
 import { escapeHtml, type OutgoingMail } from '../../mail/mailer';
 import { presentCoilComparison, presentPlugComparison } from '../../presenters/compat.presenter';
-import { presentFitReport, type FitReportRecord } from '../../presenters/fit-report.presenter';
-import { audit } from '../audit.service';
-import { compareCoilRequest, comparePlugRequest } from './compare.service';
+import { presentFitReport } from '../../presenters/fit-report.presenter';
+import { audit } from '../../repositories/audit.repository';
+import {
+  findFitReport,
+  findFitReportByToken,
+  insertFitReport,
+  listFitReports,
+  type FitReportRow,
+} from '../../repositories/fit-reports.repository';
+import { findUser } from '../../repositories/users.repository';
+import { getSettings } from '../settings.service';
+import { compareCoilsOn, comparePlugsOn } from './compare.service';
 
-const SELECT = `SELECT r.id, r.kind, r.title, r.notes, r.inputs, r.result, r.verdict, r.share_token, r.created_at, r.shop_id,
-                       u.name AS created_by_name, s.name AS shop_name
-                  FROM fit_report r JOIN "user" u ON u.id = r.created_by LEFT JOIN shop s ON s.id = r.shop_id`;
+/** The list shows this many reports, newest first. */
+const LIST_LIMIT = 200;
 
 /** A technician sees only its own shop's reports; the store's staff see every report. */
 function visibleTo(user: User, r: { shop_id: string | null }): boolean {
@@ -28,60 +36,54 @@ export class FitReportService {
   ) {}
 
   /** The verdict is recomputed here from the inputs: a client's verdict is never trusted. */
-  async create(user: User, body: FitReportBody, settings: CompatSettings): Promise<FitReportRecord> {
+  async create(user: User, body: FitReportBody): Promise<FitReportRow> {
+    const { compat: settings } = await getSettings(this.ds);
+    const ex = this.ds.manager;
     // The report keeps the result as it was shown that day: later changes to the model or the settings do not rewrite it.
     const result =
       body.kind === 'coil'
-        ? presentCoilComparison(await compareCoilRequest(this.ds, body.inputs, settings))
-        : presentPlugComparison(await comparePlugRequest(this.ds, body.inputs, settings));
+        ? presentCoilComparison(await compareCoilsOn(ex, body.inputs, settings))
+        : presentPlugComparison(await comparePlugsOn(ex, body.inputs, settings));
     const token = randomBytes(24).toString('base64url');
     const title = body.title?.trim() || `${result.substitute.label} for ${result.original.label} on ${result.engine.label.split(' — ')[0]}`;
     const id = await this.ds.transaction(async (m) => {
-      const rows = (await m.query(
-        `INSERT INTO fit_report (kind, title, notes, inputs, result, verdict, share_token, created_by, shop_id)
-         VALUES ($1,$2,$3,$4,$5,$6,$7,$8,$9) RETURNING id`,
-        [
-          body.kind,
-          title,
-          body.notes ?? '',
-          JSON.stringify(body.inputs),
-          JSON.stringify(result),
-          result.verdict,
-          token,
-          user.id,
-          user.shopId,
-        ],
-      )) as { id: string }[];
+      const reportId = await insertFitReport(m, {
+        kind: body.kind,
+        title,
+        notes: body.notes ?? '',
+        inputs: body.inputs,
+        result,
+        shareToken: token,
+        createdBy: user.id,
+        shopId: user.shopId,
+      });
       await audit(m, {
         actorId: user.id,
         action: 'fit-report.create',
         entityType: 'fit_report',
-        entityId: rows[0]!.id,
+        entityId: reportId,
         data: { verdict: result.verdict },
       });
-      return rows[0]!.id;
+      return reportId;
     });
     return this.get(user, id);
   }
 
-  async list(user: User): Promise<FitReportRecord[]> {
-    return (await this.ds.query(`${SELECT} WHERE ($1::uuid IS NULL OR r.shop_id = $1) ORDER BY r.created_at DESC LIMIT 200`, [
-      user.role === 'technician' ? user.shopId : null,
-    ])) as FitReportRecord[];
+  list(user: User): Promise<FitReportRow[]> {
+    return listFitReports(this.ds.manager, user.role === 'technician' ? user.shopId : null, LIST_LIMIT);
   }
 
-  async get(user: User, id: string): Promise<FitReportRecord> {
-    const rows = (await this.ds.query(`${SELECT} WHERE r.id = $1`, [id])) as FitReportRecord[];
-    const r = rows[0];
+  async get(user: User, id: string): Promise<FitReportRow> {
+    const r = await findFitReport(this.ds.manager, id);
     // Another shop's report is "not found", so its existence does not leak.
     if (!r || !visibleTo(user, r)) throw AppError.notFound('Fit report');
     return r;
   }
 
-  async getShared(token: string): Promise<FitReportRecord> {
-    const rows = (await this.ds.query(`${SELECT} WHERE r.share_token = $1`, [token])) as FitReportRecord[];
-    if (!rows[0]) throw AppError.notFound('Fit report');
-    return rows[0];
+  async getShared(token: string): Promise<FitReportRow> {
+    const r = await findFitReportByToken(this.ds.manager, token);
+    if (!r) throw AppError.notFound('Fit report');
+    return r;
   }
 
   /** Checks the sender may see the report, then queues the e-mail with its audit row. */
@@ -95,11 +97,11 @@ export class FitReportService {
 
   /** The message, rendered by the mail job from PostgreSQL (the sender's right to it was checked when it was queued). */
   async mail(id: string, senderId: string, to: string): Promise<OutgoingMail> {
-    const rows = (await this.ds.query(`${SELECT} WHERE r.id = $1`, [id])) as FitReportRecord[];
-    const senders = (await this.ds.query(`SELECT name FROM "user" WHERE id = $1`, [senderId])) as { name: string }[];
-    if (!rows[0] || !senders[0]) throw new Error(`fit report ${id} or its sender ${senderId} is gone`);
-    const report = presentFitReport(rows[0], this.appUrl);
-    const sender = senders[0].name;
+    const row = await findFitReport(this.ds.manager, id);
+    const senderUser = await findUser(this.ds.manager, senderId);
+    if (!row || !senderUser) throw new Error(`fit report ${id} or its sender ${senderId} is gone`);
+    const report = presentFitReport(row, this.appUrl);
+    const sender = senderUser.name;
     const lines = report.result.checks.map((c) => `  ${c.verdict.toUpperCase().padEnd(6)} ${checkLabel(c.id)}: ${c.reason}`).join('\n');
     const htmlRows = report.result.checks
       .map(

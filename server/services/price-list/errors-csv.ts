@@ -2,45 +2,14 @@ import type { Writable } from 'node:stream';
 import type { DataSource } from 'typeorm';
 import { toCsv } from '../../../shared/price-list/csv-escape';
 import type { PriceListField } from '../../../shared/price-list/fields';
-import { validateMapping, type Mapping } from '../../../shared/price-list/mapping';
+import { validateMapping } from '../../../shared/price-list/mapping';
 import { formatCents } from '../../../shared/money';
 import { AppError } from '../../errors';
+import { errorLinesAfter, type ErrorLine } from '../../repositories/price-list-rows.repository';
+import { stagedFacts } from '../../repositories/price-lists.repository';
 
 /** Rejected lines fetched per query while the download streams. */
 const BATCH = 2000;
-
-interface ErrorLine {
-  id: string;
-  line: number;
-  column: string | null;
-  message: string;
-  raw: string[] | null;
-  part_number: string | null;
-  brand: string | null;
-  description: string | null;
-  cost_cents: number | null;
-  list_cents: number | null;
-  core_cents: number | null;
-  pack_qty: number | null;
-  gtin: string | null;
-  supersedes: string | null;
-  kind: string | null;
-  coil: Record<string, unknown> | null;
-  plug: Record<string, unknown> | null;
-}
-
-// A line rejected by the parser kept its cells; one rejected later (a duplicate's first line, an
-// unknown brand) was staged, and its cells are rebuilt from the staged values.
-const BATCH_SQL = `
-SELECT e.id, e.line, e."column", e.message,
-       coalesce(e.raw, (SELECT e2.raw FROM price_list_row_error e2
-                         WHERE e2.price_list_id = e.price_list_id AND e2.line = e.line AND e2.raw IS NOT NULL LIMIT 1)) AS raw,
-       r.part_number, r.brand, r.description, r.cost_cents, r.list_cents, r.core_cents, r.pack_qty, r.gtin, r.supersedes, r.kind, r.coil, r.plug
-  FROM price_list_row_error e
-  LEFT JOIN price_list_row r ON r.price_list_id = e.price_list_id AND r.line = e.line
- WHERE e.price_list_id = $1 AND (e.line, e.id) > ($2, $3::bigint)
- ORDER BY e.line, e.id
- LIMIT ${BATCH}`;
 
 /** True once the reader took what was written; false when it went away (the download was cancelled). */
 function drained(out: Writable): Promise<boolean> {
@@ -94,11 +63,7 @@ function stagedValue(e: ErrorLine, field: PriceListField): string {
  * formulas (=, +, -, @) so a spreadsheet shows supplier text instead of running it.
  */
 export async function writeErrorsCsv(ds: DataSource, listId: string, out: Writable): Promise<void> {
-  const lists = (await ds.query(`SELECT columns, mapping FROM price_list WHERE id = $1`, [listId])) as {
-    columns: string[];
-    mapping: Mapping;
-  }[];
-  const list = lists[0];
+  const list = await stagedFacts(ds.manager, listId);
   if (!list) throw AppError.notFound('Price list');
   const check = validateMapping(list.columns, list.mapping);
   const fieldAt = new Map<number, PriceListField>();
@@ -108,7 +73,7 @@ export async function writeErrorsCsv(ds: DataSource, listId: string, out: Writab
   out.write(`\uFEFF${toCsv([['Line', 'Column', 'Reason', ...list.columns]])}`);
   let after: [number, string] = [0, '0'];
   for (;;) {
-    const rows = (await ds.query(BATCH_SQL, [listId, after[0], after[1]])) as ErrorLine[];
+    const rows = await errorLinesAfter(ds.manager, listId, after, BATCH);
     if (rows.length === 0) break;
     const csv = toCsv(
       rows.map((e) => {
@@ -126,4 +91,9 @@ export async function writeErrorsCsv(ds: DataSource, listId: string, out: Writab
     if (last === undefined) break;
     after = [last.line, last.id];
   }
+}
+
+/** The download's name: the uploaded file's, marked as its rejected lines. */
+export function errorsCsvFileName(uploadedName: string): string {
+  return `${uploadedName.replace(/\.[^.]*$/, '') || 'price-list'}-rejected.csv`;
 }

@@ -1,8 +1,9 @@
 import { createHash } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import { Readable } from 'node:stream';
-import type pg from 'pg';
 import type { DataSource } from 'typeorm';
+import type { Executor } from '../../db/executor';
+import { findFileChunk, hasFileChunks, insertFileChunk } from '../../repositories/price-list-files.repository';
 
 /** Pieces of 1 MiB: big enough for few round trips, small enough to stream back without holding the file. */
 const CHUNK_BYTES = 1024 * 1024;
@@ -14,10 +15,10 @@ export async function sha256OfFile(path: string): Promise<string> {
 }
 
 /** Keeps the uploaded bytes with the list (inside the caller's transaction), so a new mapping can re-read them. */
-export async function storeFileChunks(client: pg.PoolClient, listId: string, path: string): Promise<void> {
+export async function storeFileChunks(ex: Executor, listId: string, path: string): Promise<void> {
   let seq = 0;
   for await (const chunk of createReadStream(path, { highWaterMark: CHUNK_BYTES })) {
-    await client.query(`INSERT INTO price_list_file_chunk (price_list_id, seq, data) VALUES ($1, $2, $3)`, [listId, seq++, chunk]);
+    await insertFileChunk(ex, listId, seq++, chunk as Buffer);
   }
 }
 
@@ -25,18 +26,14 @@ export async function storeFileChunks(client: pg.PoolClient, listId: string, pat
 export function readFileChunks(ds: DataSource, listId: string): Readable {
   async function* pieces(): AsyncGenerator<Buffer> {
     for (let seq = 0; ; seq++) {
-      const rows = (await ds.query(`SELECT data FROM price_list_file_chunk WHERE price_list_id = $1 AND seq = $2`, [listId, seq])) as {
-        data: Buffer;
-      }[];
-      const piece = rows[0];
+      const piece = await findFileChunk(ds.manager, listId, seq);
       if (!piece) return;
-      yield piece.data;
+      yield piece;
     }
   }
   return Readable.from(pieces());
 }
 
-export async function hasStoredFile(ds: DataSource, listId: string): Promise<boolean> {
-  const rows = (await ds.query(`SELECT 1 FROM price_list_file_chunk WHERE price_list_id = $1 AND seq = 0`, [listId])) as unknown[];
-  return rows.length > 0;
+export function hasStoredFile(ds: DataSource, listId: string): Promise<boolean> {
+  return hasFileChunks(ds.manager, listId);
 }

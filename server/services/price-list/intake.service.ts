@@ -2,9 +2,21 @@ import { randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import type { DataSource } from 'typeorm';
 import { validateMapping, type Mapping } from '../../../shared/price-list/mapping';
-import type { PriceListRecord } from '../../presenters/price-list.presenter';
 import { AppError } from '../../errors';
-import { audit } from '../audit.service';
+import { audit } from '../../repositories/audit.repository';
+import { deleteFileChunks } from '../../repositories/price-list-files.repository';
+import { deleteStagedRows } from '../../repositories/price-list-rows.repository';
+import {
+  committedListOfFile,
+  failAbandonedLists,
+  markCompared,
+  markDiscarded,
+  stagedFacts,
+  type PriceListRow,
+  type StagedFacts,
+} from '../../repositories/price-lists.repository';
+import { rememberedMapping } from '../../repositories/suppliers.repository';
+import { intakeSettings } from '../settings.service';
 import { diffStagedList, fieldHeaders } from './diff';
 import { hasStoredFile, readFileChunks, sha256OfFile } from './file-store';
 import { lockListOrRefuse, lockSupplier } from './locks';
@@ -28,17 +40,13 @@ export interface UploadInput {
 }
 
 async function supplierMapping(ds: DataSource, supplierId: string): Promise<Mapping | null> {
-  const rows = (await ds.query(`SELECT mapping FROM supplier WHERE id = $1`, [supplierId])) as { mapping: Mapping | null }[];
-  if (!rows[0]) throw AppError.notFound('Supplier');
-  return rows[0].mapping;
+  const mapping = await rememberedMapping(ds.manager, supplierId);
+  if (mapping === undefined) throw AppError.notFound('Supplier');
+  return mapping;
 }
 
 async function refuseCommittedFile(ds: DataSource, supplierId: string, sha256: string): Promise<void> {
-  const rows = (await ds.query(
-    `SELECT id, committed_at, file_name FROM price_list WHERE supplier_id = $1 AND sha256 = $2 AND status = 'committed'`,
-    [supplierId, sha256],
-  )) as { id: string; committed_at: Date; file_name: string }[];
-  const done = rows[0];
+  const done = await committedListOfFile(ds.manager, supplierId, sha256);
   if (done) {
     throw AppError.conflict(
       `This same file (${done.file_name}) was committed for this supplier on ${done.committed_at.toISOString().slice(0, 10)}; nothing to do.`,
@@ -48,14 +56,12 @@ async function refuseCommittedFile(ds: DataSource, supplierId: string, sha256: s
 }
 
 /** POST /api/price-lists: reads, checks, stages and compares a supplier's file. */
-export async function uploadPriceList(deps: IntakeDeps, input: UploadInput): Promise<PriceListRecord> {
+export async function uploadPriceList(deps: IntakeDeps, input: UploadInput): Promise<PriceListRow> {
   const ds = deps.dataSource;
   const remembered = await supplierMapping(ds, input.supplierId);
   const sha256 = await sha256OfFile(input.filePath);
   await refuseCommittedFile(ds, input.supplierId, sha256);
-  await ds.query(
-    `UPDATE price_list SET status = 'failed' WHERE status = 'processing' AND updated_at < now() - interval '${ABANDONED_AFTER}'`,
-  );
+  await failAbandonedLists(ds.manager, ABANDONED_AFTER);
   const listId = input.id ?? randomUUID();
   await stageList(deps, {
     listId,
@@ -71,23 +77,15 @@ export async function uploadPriceList(deps: IntakeDeps, input: UploadInput): Pro
   return getPriceList(ds, listId);
 }
 
-interface StagedListFacts {
-  supplier_id: string;
-  status: string;
-  columns: string[];
-  mapping: Mapping;
-  size_bytes: string;
-  data_lines: number;
-}
+/** A list that can be previewed again: staged, so its data lines are counted. */
+type StagedList = StagedFacts & { data_lines: number };
 
-async function loadStaged(ds: DataSource, listId: string): Promise<StagedListFacts> {
-  const rows = (await ds.query(`SELECT supplier_id, status, columns, mapping, size_bytes, data_lines FROM price_list WHERE id = $1`, [
-    listId,
-  ])) as StagedListFacts[];
-  const list = rows[0];
+async function loadStaged(ds: DataSource, listId: string): Promise<StagedList> {
+  const list = await stagedFacts(ds.manager, listId);
   if (!list) throw AppError.notFound('Price list');
-  if (list.status !== 'staged') throw AppError.conflict(`This price list is ${list.status}; only a staged list can be previewed again.`);
-  return list;
+  if (list.status !== 'staged' || list.data_lines === null)
+    throw AppError.conflict(`This price list is ${list.status}; only a staged list can be previewed again.`);
+  return { ...list, data_lines: list.data_lines };
 }
 
 function sameMapping(a: Mapping, b: Mapping): boolean {
@@ -97,7 +95,7 @@ function sameMapping(a: Mapping, b: Mapping): boolean {
 }
 
 /** Compares the staged rows again with the catalog as it is now (the file is not read again). */
-async function compareAgain(deps: IntakeDeps, listId: string, list: StagedListFacts, flagThresholdPct: number): Promise<void> {
+async function compareAgain(deps: IntakeDeps, listId: string, list: StagedList, flagThresholdPct: number): Promise<void> {
   const check = validateMapping(list.columns, list.mapping);
   if (!check.ok) throw new Error(`price list ${listId} holds a mapping that does not fit its columns`);
   const client = await deps.pool.connect();
@@ -113,12 +111,8 @@ async function compareAgain(deps: IntakeDeps, listId: string, list: StagedListFa
       headers: fieldHeaders(check.resolved),
       dataLines: list.data_lines,
     });
-    const updated = await client.query(
-      `UPDATE price_list SET stale = false, counts = $2, flagged = $3, flag_threshold_pct = $4, updated_at = now()
-        WHERE id = $1 AND status = 'staged'`,
-      [listId, JSON.stringify(diff.counts), diff.flagged, flagThresholdPct],
-    );
-    if (updated.rowCount !== 1) throw AppError.conflict('This price list was committed or discarded meanwhile.');
+    const compared = await markCompared(client, listId, { counts: diff.counts, flagged: diff.flagged, flagThresholdPct });
+    if (!compared) throw AppError.conflict('This price list was committed or discarded meanwhile.');
     await client.query('COMMIT');
   } catch (err) {
     failed = true;
@@ -133,11 +127,9 @@ async function compareAgain(deps: IntakeDeps, listId: string, list: StagedListFa
  * POST /api/price-lists/:id/preview: a stale list compared again with the current catalog, or,
  * with a new mapping, the kept file read again with it.
  */
-export async function previewPriceList(
-  deps: IntakeDeps,
-  input: { id: string; mapping?: Mapping; maxFileBytes: number; flagThresholdPct: number },
-): Promise<PriceListRecord> {
+export async function previewPriceList(deps: IntakeDeps, input: { id: string; mapping?: Mapping }): Promise<PriceListRow> {
   const ds = deps.dataSource;
+  const { maxFileBytes, flagThresholdPct } = await intakeSettings(ds);
   const list = await loadStaged(ds, input.id);
   if (input.mapping && !sameMapping(input.mapping, list.mapping)) {
     if (!(await hasStoredFile(ds, input.id))) throw AppError.conflict('The uploaded file is no longer kept: upload it again.');
@@ -145,35 +137,28 @@ export async function previewPriceList(
       listId: input.id,
       supplierId: list.supplier_id,
       open: () => readFileChunks(ds, input.id),
-      sizeBytes: Number(list.size_bytes),
+      sizeBytes: list.size_bytes,
       mapping: input.mapping,
       // A stored file was under the limit when it came; a lower limit since then does not refuse it.
-      maxFileBytes: Math.max(input.maxFileBytes, Number(list.size_bytes)),
-      flagThresholdPct: input.flagThresholdPct,
+      maxFileBytes: Math.max(maxFileBytes, list.size_bytes),
+      flagThresholdPct,
     });
   } else {
-    await compareAgain(deps, input.id, list, input.flagThresholdPct);
+    await compareAgain(deps, input.id, list, flagThresholdPct);
   }
   return getPriceList(ds, input.id);
 }
 
 /** POST /api/price-lists/:id/discard: the catalog is not touched; the staged rows and the kept file go. */
-export async function discardPriceList(ds: DataSource, listId: string, actorId: string | null): Promise<PriceListRecord> {
+export async function discardPriceList(ds: DataSource, listId: string, actorId: string | null): Promise<PriceListRow> {
   await ds.transaction(async (m) => {
     await lockListOrRefuse(m, listId);
-    const rows = (await m.query(`SELECT status, file_name FROM price_list WHERE id = $1 FOR UPDATE`, [listId])) as {
-      status: string;
-      file_name: string;
-    }[];
-    const list = rows[0];
+    const list = await stagedFacts(m, listId, true);
     if (!list) throw AppError.notFound('Price list');
     if (list.status !== 'staged') throw AppError.conflict(`This price list is ${list.status}; only a staged list can be discarded.`);
-    await m.query(`UPDATE price_list SET status = 'discarded', discarded_by = $2, discarded_at = now(), updated_at = now() WHERE id = $1`, [
-      listId,
-      actorId,
-    ]);
-    await m.query(`DELETE FROM price_list_row WHERE price_list_id = $1`, [listId]);
-    await m.query(`DELETE FROM price_list_file_chunk WHERE price_list_id = $1`, [listId]);
+    await markDiscarded(m, listId, actorId);
+    await deleteStagedRows(m, listId, { errors: false });
+    await deleteFileChunks(m, listId);
     await audit(m, {
       actorId,
       action: 'price-list.discard',

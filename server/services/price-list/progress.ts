@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import type { PriceListProgress } from '../../../shared/schemas/price-lists';
+import { setProgress } from '../../repositories/price-lists.repository';
 
 /** Rows between two progress writes: often enough for a progress bar, rare enough to cost nothing. */
 const EVERY_ROWS = 2000;
@@ -43,8 +44,9 @@ export class ProgressReporter {
   }
 
   private write(progress: PriceListProgress): void {
-    this.pending = this.ds
-      .query(`UPDATE price_list SET progress = $2, updated_at = now() WHERE id = $1`, [this.listId, JSON.stringify(progress)])
+    const listId = this.listId;
+    if (listId === null) return;
+    this.pending = setProgress(this.ds.manager, listId, progress)
       .then(
         () => undefined,
         (err: unknown) => console.error('[arcwise] price-list progress update failed:', err),

@@ -3,6 +3,8 @@ import type pg from 'pg';
 import type { DataSource } from 'typeorm';
 import type { Mapping } from '../../../shared/price-list/mapping';
 import { AppError } from '../../errors';
+import { deleteStagedRows } from '../../repositories/price-list-rows.repository';
+import { deleteProcessingList, insertProcessingList, markStaged } from '../../repositories/price-lists.repository';
 import { diffStagedList, fieldHeaders } from './diff';
 import { asAppError } from './file-refusal';
 import { storeFileChunks } from './file-store';
@@ -40,21 +42,17 @@ async function closeParse(parsed: PriceListParse): Promise<void> {
   await parsed.events.return();
 }
 
-async function insertProcessingList(ds: DataSource, run: StageRun, create: NonNullable<StageRun['create']>): Promise<void> {
+async function createProcessingList(ds: DataSource, run: StageRun, create: NonNullable<StageRun['create']>): Promise<void> {
   try {
-    await ds.query(
-      `INSERT INTO price_list (id, supplier_id, file_name, sha256, size_bytes, status, progress, created_by)
-       VALUES ($1, $2, $3, $4, $5, 'processing', $6, $7)`,
-      [
-        run.listId,
-        run.supplierId,
-        create.fileName,
-        create.sha256,
-        run.sizeBytes,
-        JSON.stringify({ phase: 'reading', rowsDone: 0, bytesRead: 0, bytesTotal: run.sizeBytes }),
-        create.actorId,
-      ],
-    );
+    await insertProcessingList(ds.manager, {
+      id: run.listId,
+      supplierId: run.supplierId,
+      fileName: create.fileName,
+      sha256: create.sha256,
+      sizeBytes: run.sizeBytes,
+      progress: { phase: 'reading', rowsDone: 0, bytesRead: 0, bytesTotal: run.sizeBytes },
+      createdBy: create.actorId,
+    });
   } catch (err) {
     if ((err as { code?: string }).code === '23505') throw AppError.conflict('An upload with this id exists already.');
     throw err;
@@ -83,7 +81,7 @@ export async function stageList(deps: IntakeDeps, run: StageRun): Promise<void> 
   }
   if (run.create) {
     try {
-      await insertProcessingList(ds, run, run.create);
+      await createProcessingList(ds, run, run.create);
     } catch (err) {
       await closeParse(parsed);
       throw err;
@@ -96,10 +94,7 @@ export async function stageList(deps: IntakeDeps, run: StageRun): Promise<void> 
   try {
     await client.query('BEGIN');
     await lockListOrRefuse(client, run.listId);
-    if (!run.create) {
-      await client.query(`DELETE FROM price_list_row WHERE price_list_id = $1`, [run.listId]);
-      await client.query(`DELETE FROM price_list_row_error WHERE price_list_id = $1`, [run.listId]);
-    }
+    if (!run.create) await deleteStagedRows(client, run.listId, { errors: true });
     const { summary } = await stageRows(client, run.listId, parsed);
     if (run.create) await storeFileChunks(client, run.listId, run.create.filePath);
     progress.comparing(summary.dataLines);
@@ -113,25 +108,19 @@ export async function stageList(deps: IntakeDeps, run: StageRun): Promise<void> 
       dataLines: summary.dataLines,
     });
     await progress.close();
-    const updated = await client.query(
-      `UPDATE price_list SET status = 'staged', stale = false, encoding = $2, delimiter = $3, columns = $4, mapping = $5,
-              mapping_source = $6, data_lines = $7, counts = $8, flagged = $9, flag_threshold_pct = $10, progress = $11, updated_at = now()
-        WHERE id = $1 AND status IN ('processing', 'staged')`,
-      [
-        run.listId,
-        summary.encoding,
-        head.delimiter,
-        JSON.stringify(head.headers),
-        JSON.stringify(head.mapping),
-        head.mappingSource,
-        summary.dataLines,
-        JSON.stringify(diff.counts),
-        diff.flagged,
-        run.flagThresholdPct,
-        JSON.stringify(progress.done(summary.dataLines)),
-      ],
-    );
-    if (updated.rowCount !== 1) throw AppError.conflict('This price list was committed or discarded meanwhile.');
+    const staged = await markStaged(client, run.listId, {
+      encoding: summary.encoding,
+      delimiter: head.delimiter,
+      columns: head.headers,
+      mapping: head.mapping,
+      mappingSource: head.mappingSource,
+      dataLines: summary.dataLines,
+      counts: diff.counts,
+      flagged: diff.flagged,
+      flagThresholdPct: run.flagThresholdPct,
+      progress: progress.done(summary.dataLines),
+    });
+    if (!staged) throw AppError.conflict('This price list was committed or discarded meanwhile.');
     await client.query('COMMIT');
   } catch (err) {
     failed = true;
@@ -139,7 +128,7 @@ export async function stageList(deps: IntakeDeps, run: StageRun): Promise<void> 
     await progress.close();
     await client.query('ROLLBACK').catch(() => undefined);
     if (run.create) {
-      await ds.query(`DELETE FROM price_list WHERE id = $1 AND status = 'processing'`, [run.listId]).catch(() => undefined);
+      await deleteProcessingList(ds.manager, run.listId).catch(() => undefined);
     }
     throw asAppError(err, run.maxFileBytes);
   } finally {

@@ -4,7 +4,8 @@ import type pg from 'pg';
 import { from as copyFrom, type CopyStreamQuery } from 'pg-copy-streams';
 import type { PriceListParse, PriceListSummary } from './parse';
 import { copyLine, STAGING_COPY_SQL } from './copy-rows';
-import { insertRowErrors, toEntries, type RowErrorEntry } from './row-errors';
+import { insertFileRowErrors, retractLines, type RowErrorEntry } from '../../repositories/price-list-rows.repository';
+import { toEntries } from './row-errors';
 
 /** COPY text handed to the socket in pieces of about this many characters. */
 const WRITE_CHARS = 128 * 1024;
@@ -86,7 +87,7 @@ export async function stageRows(client: pg.PoolClient, listId: string, parsed: P
         errors.push(...toEntries(event.errors, event.cells));
         if (errors.length >= ERROR_BATCH) {
           await copy.end();
-          await insertRowErrors(client, listId, errors);
+          await insertFileRowErrors(client, listId, errors);
           errors = [];
           copy.reopen();
         }
@@ -100,12 +101,7 @@ export async function stageRows(client: pg.PoolClient, listId: string, parsed: P
     throw err;
   }
   if (summary === null) throw new Error('price-list events ended without a summary');
-  await insertRowErrors(client, listId, [...errors, ...toEntries(summary.lateErrors, null)]);
-  if (summary.retractedLines.length > 0) {
-    await client.query(`UPDATE price_list_row SET retracted = true WHERE price_list_id = $1 AND line = ANY($2::int[])`, [
-      listId,
-      summary.retractedLines,
-    ]);
-  }
+  await insertFileRowErrors(client, listId, [...errors, ...toEntries(summary.lateErrors, null)]);
+  await retractLines(client, listId, summary.retractedLines);
   return { summary, copied: copy.rows };
 }

@@ -1,7 +1,9 @@
 import type { Request, Response } from 'express';
 import multer from 'multer';
+import type { DataSource } from 'typeorm';
 import { PRICE_LIST_MAX_FILE_NAME, PRICE_LIST_UPLOAD_FIELD } from '../../../shared/schemas/price-lists';
 import { AppError } from '../../errors';
+import { intakeSettings, type IntakeSettings } from '../settings.service';
 import { countingDiskStorage } from './counting-storage';
 import { fileRefusal, tooLarge } from './file-refusal';
 import { PriceListFileError } from './parse';
@@ -10,9 +12,15 @@ import { PriceListFileError } from './parse';
  * Receives the multipart upload onto disk (not memory: a 50 MB file and the parse of it would
  * otherwise sit in the heap together), with the size limit from Settings, counting its rows on
  * the way so a file over the row limit is refused as it arrives. The caller deletes
- * req.file.path when done.
+ * req.file.path when done, and reads the file under the settings answered.
  */
-export function receivePriceListUpload(req: Request, res: Response, maxFileBytes: number): Promise<void> {
+export async function receivePriceListUpload(req: Request, res: Response, ds: DataSource): Promise<IntakeSettings> {
+  const settings = await intakeSettings(ds);
+  await receive(req, res, settings.maxFileBytes);
+  return settings;
+}
+
+function receive(req: Request, res: Response, maxFileBytes: number): Promise<void> {
   const upload = multer({
     storage: countingDiskStorage({ maxFileBytes }),
     limits: { fileSize: maxFileBytes, files: 1, fields: 10, fieldSize: 512 * 1024, parts: 12 },

@@ -9,9 +9,9 @@ export interface AuditEntry {
   data?: Record<string, unknown>;
 }
 
-/** Writes an audit row inside the caller's transaction, so the change and its record commit together. */
-export async function audit(manager: EntityManager, entry: AuditEntry): Promise<void> {
-  await manager.insert(AuditLogEntity, {
+/** Writes an audit row through the caller's executor: inside its transaction, the change and its record commit together. */
+export async function audit(ex: EntityManager, entry: AuditEntry): Promise<void> {
+  await ex.insert(AuditLogEntity, {
     actorId: entry.actorId,
     action: entry.action,
     entityType: entry.entityType,
