@@ -1,5 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { PriceListApplied, PriceListCounts } from '../../../shared/schemas/price-lists';
+import { formatDate } from '../../../shared/format';
 import { AppError } from '../../errors';
 import { audit } from '../audit.service';
 import { lockListOrRefuse, lockSupplier } from './locks';
@@ -149,7 +150,7 @@ async function refuseUnlessCommittable(m: EntityManager, listId: string, list: L
     [list.supplier_id, list.sha256, listId],
   )) as { id: string; committed_at: Date }[];
   if (same[0]) {
-    throw AppError.conflict(`This same file was committed for this supplier on ${same[0].committed_at.toISOString().slice(0, 10)}.`, {
+    throw AppError.conflict(`This same file was committed for this supplier on ${formatDate(same[0].committed_at)}.`, {
       priceListId: same[0].id,
     });
   }

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { partStatusSchema, updatePartBodySchema, type UpdatePartBody } from '@shared/schemas/parts';
-import { issuesByPath } from '@/components/compat/field-errors';
+import { issuesByPath } from '@/components/ui/field-errors';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';

@@ -1,7 +1,7 @@
 import { useId, useState, type FormEvent } from 'react';
 import { createPartBodySchema } from '@shared/schemas/parts';
 import { PART_KINDS, type PartKind } from '@shared/schemas/specs';
-import { issuesByPath } from '@/components/compat/field-errors';
+import { issuesByPath } from '@/components/ui/field-errors';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';

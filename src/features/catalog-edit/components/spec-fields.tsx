@@ -71,7 +71,7 @@ export function SpecFields({
 }) {
   const set = (name: string, v: string | boolean) => onChange({ ...values, [name]: v });
   const fields = specFieldsFor(kind);
-  const boxes = fields.filter((f) => f.type === 'checkbox');
+  const boxes = fields.filter((f) => f.input === 'checkbox');
   return (
     <div className="flex flex-col gap-3">
       <div className="grid grid-cols-[repeat(auto-fill,minmax(11.5rem,1fr))] gap-x-3 gap-y-2.5">
@@ -80,8 +80,8 @@ export function SpecFields({
           const text = typeof v === 'string' ? v : '';
           const raw = errors[f.name];
           const error = raw === undefined ? undefined : specMessage(raw);
-          if (f.type === 'checkbox') return null;
-          if (f.type === 'heat-code')
+          if (f.input === 'checkbox') return null;
+          if (f.name === 'heatCode')
             return (
               <HeatCodeField
                 key={f.name}
@@ -92,10 +92,10 @@ export function SpecFields({
                 onChange={(c) => set(f.name, c)}
               />
             );
-          if (f.type === 'select')
+          if (f.input === 'select')
             return (
               <ChoiceField key={f.name} label={f.label} value={text} onChange={(e) => set(f.name, e.target.value)} error={error}>
-                {f.options.map((o) => (
+                {(f.options ?? []).map((o) => (
                   <option key={o} value={o}>
                     {o}
                   </option>
@@ -106,11 +106,11 @@ export function SpecFields({
             <UnitField
               key={f.name}
               label={f.label}
-              unit={f.type === 'text' ? undefined : f.unit}
-              inputMode={f.type === 'text' ? 'text' : f.type === 'integer' ? 'numeric' : 'decimal'}
+              unit={f.unit}
+              inputMode={f.input === 'text' ? 'text' : f.input === 'integer' ? 'numeric' : 'decimal'}
               value={text}
               onChange={(e) => set(f.name, e.target.value)}
-              hint={f.hint ?? (f.type !== 'text' && f.optional ? 'optional' : undefined)}
+              hint={f.hint ?? (f.optional ? 'optional' : undefined)}
               error={error}
             />
           );

@@ -64,9 +64,9 @@ export function SpecForm({
           const server = serverErrors[f.name];
           const error = errors[f.name] ?? (server ? specMessage(server) : undefined);
           const v = values[f.name];
-          if (f.type === 'checkbox')
+          if (f.input === 'checkbox')
             return <CheckboxField key={f.name} label={f.label} checked={v === true} onChange={(c) => set(f.name, c)} />;
-          if (f.type === 'select') {
+          if (f.input === 'select') {
             return (
               <SelectField
                 key={f.name}
@@ -74,7 +74,7 @@ export function SpecForm({
                 value={typeof v === 'string' ? v : ''}
                 onChange={(e) => set(f.name, e.target.value)}
               >
-                {f.options.map((o) => (
+                {(f.options ?? []).map((o) => (
                   <option key={o} value={o}>
                     {o}
                   </option>
@@ -86,11 +86,11 @@ export function SpecForm({
             <UnitField
               key={f.name}
               label={f.label}
-              unit={f.type === 'text' ? undefined : f.unit}
-              inputMode={f.type === 'text' ? 'text' : 'decimal'}
+              unit={f.unit}
+              inputMode={f.input === 'text' ? 'text' : 'decimal'}
               value={typeof v === 'string' ? v : ''}
               onChange={(e) => set(f.name, e.target.value)}
-              hint={'hint' in f ? f.hint : f.type !== 'text' && f.optional ? 'optional' : undefined}
+              hint={f.hint ?? (f.optional ? 'optional' : undefined)}
               error={error}
             />
           );

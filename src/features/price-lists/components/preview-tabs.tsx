@@ -1,6 +1,6 @@
 import { useId, useRef, useState, type KeyboardEvent } from 'react';
 import type { PriceListChangeType, PriceListCounts } from '@shared/schemas/price-lists';
-import { formatCount } from '../format';
+import { formatCount } from '@shared/format';
 import { ChangeTable } from './change-table';
 import { RejectedRows } from './rejected-rows';
 
