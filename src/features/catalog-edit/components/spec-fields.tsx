@@ -1,8 +1,7 @@
 import { useId } from 'react';
 import type { PartKind } from '@shared/schemas/specs';
-import { UnitField } from '@/components/compat/unit-field';
+import { SelectField, TextField } from '@/components/ui/field';
 import type { Brand } from '@shared/schemas/brands';
-import { ChoiceField } from './choice-field';
 import { specFieldsFor, specMessage, type SpecValues } from '../spec-fields';
 
 function Checkbox({ label, checked, onChange }: { label: string; checked: boolean; onChange: (v: boolean) => void }) {
@@ -32,7 +31,7 @@ function HeatCodeField({
 }) {
   const known = heatCodes.some((h) => h.code === value);
   return (
-    <ChoiceField
+    <SelectField
       label="Heat code"
       value={value}
       onChange={(e) => onChange(e.target.value)}
@@ -47,7 +46,7 @@ function HeatCodeField({
           {h.code} — heat step {h.heatStep}
         </option>
       ))}
-    </ChoiceField>
+    </SelectField>
   );
 }
 
@@ -94,16 +93,16 @@ export function SpecFields({
             );
           if (f.input === 'select')
             return (
-              <ChoiceField key={f.name} label={f.label} value={text} onChange={(e) => set(f.name, e.target.value)} error={error}>
+              <SelectField key={f.name} label={f.label} value={text} onChange={(e) => set(f.name, e.target.value)} error={error}>
                 {(f.options ?? []).map((o) => (
                   <option key={o} value={o}>
                     {o}
                   </option>
                 ))}
-              </ChoiceField>
+              </SelectField>
             );
           return (
-            <UnitField
+            <TextField
               key={f.name}
               label={f.label}
               unit={f.unit}

@@ -1,8 +1,7 @@
 import { useId, useState, type FormEvent } from 'react';
 import type { CoilSpec, PartKind, ResolvedPlugSpec } from '@shared/schemas/specs';
 import { Button } from '@/components/ui/button';
-import { UnitField } from '@/components/compat/unit-field';
-import { SelectField } from '@/components/ui/field';
+import { SelectField, TextField } from '@/components/ui/field';
 import { fieldsFor, parseCoilSpec, parsePlugSpec, specMessage, type FormValues } from '../spec-fields';
 
 export type TypedSpec = { kind: 'coil'; spec: CoilSpec } | { kind: 'plug'; spec: ResolvedPlugSpec };
@@ -83,7 +82,7 @@ export function SpecForm({
             );
           }
           return (
-            <UnitField
+            <TextField
               key={f.name}
               label={f.label}
               unit={f.unit}
