@@ -21,6 +21,7 @@ const NEGATIVE = /^[-−(]|-$|\)$/;
 /**
  * Parses "12.5", "$1,234.50", "12,50" to cents. Empty (or blank) is `cents: null`, for the
  * caller to accept when the amount is optional. Negative amounts are refused.
+ * Printing an amount is `formatMoney` in shared/format.ts.
  */
 export function parseMoney(text: string): MoneyParse {
   const plain = plainCents(text);
@@ -72,22 +73,4 @@ function plainCents(s: string): number {
   }
   const cents = whole * 100 + fraction;
   return cents <= MONEY_MAX_CENTS ? cents : -1;
-}
-
-export interface FormatCentsOptions {
-  /** Printed before the amount; '' for machine-readable exports. */
-  symbol?: string;
-  /** Thousands separators; off for machine-readable exports. */
-  grouping?: boolean;
-}
-
-/** 123450 → "$1,234.50"; -500 → "-$5.00" (a price change can go down). */
-export function formatCents(cents: number, opts: FormatCentsOptions = {}): string {
-  if (!Number.isSafeInteger(cents)) throw new RangeError(`cents must be an integer, got ${cents}`);
-  const { symbol = '$', grouping = true } = opts;
-  const abs = Math.abs(cents);
-  const whole = String(Math.floor(abs / 100));
-  const grouped = grouping ? whole.replace(/\B(?=(\d{3})+$)/g, ',') : whole;
-  const fraction = String(abs % 100).padStart(2, '0');
-  return `${cents < 0 ? '-' : ''}${symbol}${grouped}.${fraction}`;
 }

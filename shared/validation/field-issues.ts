@@ -11,8 +11,11 @@ type Issue = z.core.$ZodIssue;
  * field's name; a message a schema wrote itself ("a technician belongs to a shop") follows a colon.
  */
 export function fieldSentence({ field, message }: FieldIssue): string {
-  return /^(must|is|does|holds) /.test(message) ? `${field} ${message}` : `${field}: ${message}`;
+  return readsOnFromField(message) ? `${field} ${message}` : `${field}: ${message}`;
 }
+
+/** Whether a message is a phrase of `plainWords` that reads on from the field's name ("must be at least 5"). */
+export const readsOnFromField = (message: string): boolean => /^(must|is|does|holds) /.test(message);
 
 /**
  * A failed parse as the API reports it: one `{ field, message }` per problem, the field as a

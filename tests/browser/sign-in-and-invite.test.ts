@@ -42,6 +42,27 @@ describe('journey 7: sign-in and team', () => {
     await s.page.getByRole('cell', { name: email }).waitFor();
     await s.shot('admin-team');
 
+    // A role change signs the person out, so it asks first; Cancel leaves the role as it was.
+    const role = s.page.getByLabel('Role of Robin Invitee');
+    await role.selectOption('clerk');
+    const dialog = s.page.getByRole('dialog', { name: 'Make Robin Invitee a clerk?' });
+    await dialog.waitFor();
+    await s.shot('admin-team-confirm');
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    expect(await role.inputValue()).toBe('buyer');
+    await role.selectOption('clerk');
+    await dialog.getByRole('button', { name: 'Make clerk' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    expect(await role.inputValue()).toBe('clerk');
+
+    // On a phone the team table scrolls inside its own region; the page stays the phone's width.
+    await s.page.setViewportSize({ width: 390, height: 844 });
+    await s.page.getByRole('region', { name: 'People' }).waitFor();
+    expect(await s.page.evaluate(() => document.documentElement.scrollWidth)).toBe(390);
+    await s.shot('admin-team-phone');
+    await s.page.setViewportSize({ width: 1366, height: 900 });
+
     // Beside the Outbox, the Jobs page: follow-up work that did not go through at once, if any.
     await s.page.getByRole('link', { name: 'Jobs' }).click();
     await s.page.getByRole('heading', { name: 'Jobs' }).waitFor();
@@ -75,6 +96,8 @@ describe('journey 7: sign-in and team', () => {
     await s.page.getByRole('link', { name: 'Go to sign-in' }).click();
     await signInAs(s, email, 'robin-password-1');
     await s.page.getByRole('heading', { name: 'Counter' }).waitFor();
+    // Made a clerk before the first sign-in: no buyer's pages in the navigation.
+    expect(await s.page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Price lists' }).count()).toBe(0);
     expect(await s.page.getByText('Robin Invitee').count()).toBeGreaterThan(0);
   });
 });

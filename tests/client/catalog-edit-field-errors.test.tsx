@@ -203,8 +203,8 @@ describe('Catalog page: messages by their fields', () => {
     const form = within(section).getByRole('form', { name: 'Coil spec' });
     const fill = (label: string, value: string) => fireEvent.change(within(form).getByLabelText(label), { target: { value } });
     const save = () => fireEvent.click(within(form).getByRole('button', { name: 'Save spec' }));
-    fill('Primary resistance min (Ω)', '0.9');
-    fill('Primary resistance max (Ω)', '0.6');
+    fill('Primary resistance, min (Ω)', '0.9');
+    fill('Primary resistance, max (Ω)', '0.6');
     save();
     expect(besideField(within(form).getByLabelText('Primary inductance (mH)')).getByText('required')).toBeTruthy();
     expect(besideField(within(form).getByLabelText('Outputs')).getByText('required')).toBeTruthy();
@@ -216,8 +216,8 @@ describe('Catalog page: messages by their fields', () => {
     fill('Turns ratio (:1)', '90');
     fill('Peak primary current (A)', '7.5');
     save();
-    const min = within(form).getByLabelText('Primary resistance min (Ω)');
-    expect(besideField(min).getByText('“Primary resistance min” must not exceed “Primary resistance max”')).toBeTruthy();
+    const min = within(form).getByLabelText('Primary resistance, min (Ω)');
+    expect(besideField(min).getByText('“Primary resistance, min” must not exceed “Primary resistance, max”')).toBeTruthy();
     expect(besideField(within(form).getByLabelText('Primary inductance (mH)')).queryByText('required')).toBeNull();
   });
 

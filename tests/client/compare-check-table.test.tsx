@@ -2,7 +2,7 @@ import { cleanup, render, screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
 import { VERDICTS, type CheckRow } from '@shared/schemas/compat';
 import { CheckTable } from '@/components/compat/check-table';
-import { formatFigure } from '@/components/compat/format';
+import { formatFigure } from '@shared/format';
 
 const rows: CheckRow[] = [
   {
@@ -85,7 +85,7 @@ describe('the check table', () => {
 
 describe('ranges', () => {
   it('prints both ends of a window to the same places', async () => {
-    const { formatRange } = await import('@/components/compat/format');
+    const { formatRange } = await import('@shared/format');
     expect(formatRange(0.5, 0.7, 'Ω')).toBe('0.5–0.7\u00a0Ω');
     expect(formatRange(0.5, 0.66, 'Ω')).toBe('0.50–0.66\u00a0Ω');
     expect(formatRange(6, 8.5, 'kΩ')).toBe('6.0–8.5\u00a0kΩ');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatMeasure, formatMoney, formatNumber, formatPercent, formatRange, UNITS } from '@/features/catalog/format';
+import { formatMeasure, formatMoney, formatNumber, formatPercent, formatRange, UNITS } from '@shared/format';
 
 const NBSP = '\u00a0';
 

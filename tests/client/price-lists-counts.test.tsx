@@ -6,7 +6,8 @@ import type { PriceList, PriceListCounts } from '@shared/schemas/price-lists';
 import { PriceMove } from '@/features/price-lists/components/change-table';
 import { PriceListIntake } from '@/features/price-lists/components/intake';
 import { PreviewCounts } from '@/features/price-lists/components/preview-counts';
-import { formatMoney, formatPercentChange, percentChange } from '@/features/price-lists/format';
+import { formatMoney, formatPercentChange } from '@shared/format';
+import { percentChange } from '@/features/price-lists/format';
 
 // The clean sample's preview as seed/csv/README.md states it.
 const CLEAN_COUNTS: PriceListCounts = { total: 40, new: 4, changed: 5, unchanged: 31, rejected: 0, firstPrices: 0, supersessions: 1 };

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatCents, MONEY_MAX_CENTS, parseMoney } from '../../shared/money';
+import { formatMoney } from '../../shared/format';
+import { MONEY_MAX_CENTS, parseMoney } from '../../shared/money';
 
 const cents = (text: string): number | null => {
   const parsed = parseMoney(text);
@@ -67,22 +68,22 @@ describe('parseMoney', () => {
   });
 });
 
-describe('formatCents', () => {
+describe('formatMoney', () => {
   it('prints dollars with grouping, or plain for exports', () => {
-    expect(formatCents(123450)).toBe('$1,234.50');
-    expect(formatCents(5)).toBe('$0.05');
-    expect(formatCents(-500)).toBe('-$5.00');
-    expect(formatCents(123450, { symbol: '', grouping: false })).toBe('1234.50');
+    expect(formatMoney(123450)).toBe('$1,234.50');
+    expect(formatMoney(5)).toBe('$0.05');
+    expect(formatMoney(-500)).toBe('-$5.00');
+    expect(formatMoney(123450, { symbol: '', grouping: false })).toBe('1234.50');
   });
 
   it('refuses a fraction of a cent', () => {
-    expect(() => formatCents(1.5)).toThrow(RangeError);
+    expect(() => formatMoney(1.5)).toThrow(RangeError);
   });
 
   it('round-trips through parseMoney for every amount up to the ceiling', () => {
     fc.assert(
       fc.property(fc.integer({ min: 0, max: MONEY_MAX_CENTS }), fc.boolean(), (c, grouping) => {
-        expect(cents(formatCents(c, { grouping }))).toBe(c);
+        expect(cents(formatMoney(c, { grouping }))).toBe(c);
       }),
       { numRuns: 3000, seed: 7 },
     );

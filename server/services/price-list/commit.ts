@@ -1,6 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { JobQueue } from '../../jobs/queue';
 import type { PriceListApplied, PriceListCounts } from '../../../shared/schemas/price-lists';
+import { formatDate } from '../../../shared/format';
 import { AppError } from '../../errors';
 import { audit } from '../../repositories/audit.repository';
 import { allowNestedLoops } from '../../repositories/price-list-diff.repository';
@@ -45,7 +46,7 @@ async function refuseUnlessCommittable(m: EntityManager, listId: string, list: C
   }
   const same = await committedListOfFile(m, list.supplier_id, list.sha256, listId);
   if (same) {
-    throw AppError.conflict(`This same file was committed for this supplier on ${same.committed_at.toISOString().slice(0, 10)}.`, {
+    throw AppError.conflict(`This same file was committed for this supplier on ${formatDate(same.committed_at)}.`, {
       priceListId: same.id,
     });
   }

@@ -3,7 +3,7 @@ import type { DataSource } from 'typeorm';
 import { toCsv } from '../../../shared/price-list/csv-escape';
 import type { PriceListField } from '../../../shared/price-list/fields';
 import { validateMapping } from '../../../shared/price-list/mapping';
-import { formatCents } from '../../../shared/money';
+import { formatMoney } from '../../../shared/format';
 import { AppError } from '../../errors';
 import { errorLinesAfter, type ErrorLine } from '../../repositories/price-list-rows.repository';
 import { stagedFacts } from '../../repositories/price-lists.repository';
@@ -26,7 +26,7 @@ function drained(out: Writable): Promise<boolean> {
   });
 }
 
-const money = (cents: number | null): string => (cents === null ? '' : formatCents(cents, { symbol: '', grouping: false }));
+const money = (cents: number | null): string => (cents === null ? '' : formatMoney(cents, { symbol: '', grouping: false }));
 
 function stagedValue(e: ErrorLine, field: PriceListField): string {
   switch (field) {

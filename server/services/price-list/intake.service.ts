@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import type { DataSource } from 'typeorm';
 import { validateMapping, type Mapping } from '../../../shared/price-list/mapping';
+import { formatDate } from '../../../shared/format';
 import { AppError } from '../../errors';
 import { audit } from '../../repositories/audit.repository';
 import { deleteFileChunks } from '../../repositories/price-list-files.repository';
@@ -49,7 +50,7 @@ async function refuseCommittedFile(ds: DataSource, supplierId: string, sha256: s
   const done = await committedListOfFile(ds.manager, supplierId, sha256);
   if (done) {
     throw AppError.conflict(
-      `This same file (${done.file_name}) was committed for this supplier on ${done.committed_at.toISOString().slice(0, 10)}; nothing to do.`,
+      `This same file (${done.file_name}) was committed for this supplier on ${formatDate(done.committed_at)}; nothing to do.`,
       { priceListId: done.id },
     );
   }

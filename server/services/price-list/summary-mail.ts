@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { formatCents } from '../../../shared/money';
+import { formatMoney, formatPercentChange } from '../../../shared/format';
 import { escapeHtml, type OutgoingMail } from '../../mail/mailer';
 import { largestFlaggedMoves } from '../../repositories/price-list-rows.repository';
 import { committedSummary } from '../../repositories/price-lists.repository';
@@ -8,7 +8,7 @@ import { buyerEmails } from '../../repositories/users.repository';
 /** Flagged moves listed in the message; the rest are on the Price lists page. */
 const MAX_LISTED = 20;
 
-const pct = (v: number | null): string => (v === null ? '—' : `${v > 0 ? '+' : ''}${v.toFixed(1)} %`);
+const pct = (v: number | null): string => (v === null ? '—' : formatPercentChange(v));
 
 /**
  * The summary of a committed list for the buyers, rendered by the mail job from what the commit
@@ -31,8 +31,8 @@ export async function priceListSummaryMail(ds: DataSource, listId: string, link:
     `Moves above ${facts.flag_threshold_pct ?? '—'} %: ${facts.flagged}.`,
     ...moves.map(
       (m) =>
-        `  ${m.brand} ${m.part_number}: cost ${formatCents(m.old_cost_cents)} → ${formatCents(m.cost_cents)} (${pct(m.cost_change_pct)}), ` +
-        `list ${formatCents(m.old_list_cents)} → ${formatCents(m.list_cents)} (${pct(m.list_change_pct)})`,
+        `  ${m.brand} ${m.part_number}: cost ${formatMoney(m.old_cost_cents)} → ${formatMoney(m.cost_cents)} (${pct(m.cost_change_pct)}), ` +
+        `list ${formatMoney(m.old_list_cents)} → ${formatMoney(m.list_cents)} (${pct(m.list_change_pct)})`,
     ),
     ...(facts.flagged > moves.length ? [`  … and ${facts.flagged - moves.length} more.`] : []),
     '',
@@ -42,8 +42,8 @@ export async function priceListSummaryMail(ds: DataSource, listId: string, link:
   const rows = moves
     .map(
       (m) =>
-        `<tr><td>${escapeHtml(`${m.brand} ${m.part_number}`)}</td><td>${formatCents(m.old_cost_cents)} → ${formatCents(m.cost_cents)}</td>` +
-        `<td>${pct(m.cost_change_pct)}</td><td>${formatCents(m.old_list_cents)} → ${formatCents(m.list_cents)}</td><td>${pct(m.list_change_pct)}</td></tr>`,
+        `<tr><td>${escapeHtml(`${m.brand} ${m.part_number}`)}</td><td>${formatMoney(m.old_cost_cents)} → ${formatMoney(m.cost_cents)}</td>` +
+        `<td>${pct(m.cost_change_pct)}</td><td>${formatMoney(m.old_list_cents)} → ${formatMoney(m.list_cents)}</td><td>${pct(m.list_change_pct)}</td></tr>`,
     )
     .join('');
   const html =

@@ -1,6 +1,6 @@
 import type { CheckRow } from '@shared/schemas/compat';
 import { checkLabel } from './check-labels';
-import { formatFigure } from './format';
+import { formatFigure } from '@shared/format';
 import { VerdictBadge } from './verdict-badge';
 
 const ROW_TINT = {

@@ -3,7 +3,7 @@ import type { CompatResult } from '@shared/schemas/compat';
 import { Cautions } from './cautions';
 import { CheckTable } from './check-table';
 import { CurrentChart } from './current-chart';
-import { formatMeasure } from './format';
+import { formatMeasure } from '@shared/format';
 import { LoadPointTable } from './load-point-table';
 import { VerdictBadge } from './verdict-badge';
 import { VoltageChart } from './voltage-chart';

@@ -1,7 +1,7 @@
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
 import type { CompatResult } from '@shared/schemas/compat';
 import { CHART, ORIGINAL_DASH } from './chart-colours';
-import { formatMeasure } from './format';
+import { formatMeasure } from '@shared/format';
 
 type CurvePair = NonNullable<CompatResult['currents']>;
 

@@ -1,5 +1,5 @@
 import type { CompatResult } from '@shared/schemas/compat';
-import { formatMeasure } from './format';
+import { formatMeasure } from '@shared/format';
 import { LOAD_POINT_LABELS } from './load-points';
 
 type LoadPoint = CompatResult['loadPoints'][number];

@@ -1,7 +1,7 @@
 import { Area, CartesianGrid, ComposedChart, Legend, Line, Tooltip, XAxis, YAxis } from 'recharts';
 import type { CompatResult } from '@shared/schemas/compat';
 import { CHART, ORIGINAL_DASH } from './chart-colours';
-import { formatMeasure } from './format';
+import { formatMeasure } from '@shared/format';
 import { LOAD_POINT_LABELS } from './load-points';
 
 type LoadPoint = CompatResult['loadPoints'][number];

@@ -1,4 +1,4 @@
-import type { ButtonHTMLAttributes } from 'react';
+import type { ButtonHTMLAttributes, Ref } from 'react';
 
 type Variant = 'primary' | 'secondary' | 'danger' | 'ghost';
 
@@ -9,7 +9,9 @@ const VARIANTS: Record<Variant, string> = {
   ghost: 'text-ink-soft hover:bg-paper-sunk',
 };
 
-export function Button({ variant = 'primary', className = '', ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
+export type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; ref?: Ref<HTMLButtonElement> };
+
+export function Button({ variant = 'primary', className = '', ...props }: ButtonProps) {
   return (
     <button
       type="button"

@@ -1,5 +1,5 @@
 import type { PartKind } from '@shared/schemas/specs';
-import { formatMeasure, formatRange } from '@/components/compat/format';
+import { formatMeasure, formatRange } from '@shared/format';
 import type { PartDetail } from '@shared/schemas/parts';
 import { specFieldsFor, specFigure, specLabel, type ShownSpec } from './spec-fields';
 

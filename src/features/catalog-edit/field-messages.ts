@@ -1,5 +1,5 @@
 import { conflictDetailsSchema } from '@shared/schemas/error';
-import { fieldErrorsOf } from '@/components/compat/field-errors';
+import { fieldErrorsOf } from '@/components/ui/field-errors';
 import { ApiError } from '@/lib/api-client';
 
 // A unique violation names its constraint (server/migrations/1764600100000-Catalog.ts).

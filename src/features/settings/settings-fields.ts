@@ -1,5 +1,5 @@
 import { DEFAULT_SETTINGS, settingsSchema, type Settings } from '@shared/schemas/settings';
-import { inFormWords, issuesByPath } from '@/components/compat/field-errors';
+import { inFormWords, issuesByPath } from '@/components/ui/field-errors';
 
 /**
  * The Settings form's fields: every compatibility threshold and load point and the price-list

@@ -2,23 +2,23 @@ import { useSearchParams } from 'react-router-dom';
 import type { Role } from '@shared/roles';
 import { useUser } from '@/app/use-user';
 import { ErrorNote, PageHeader, Panel } from '@/components/ui/panel';
+import { Tabs, type TabItem } from '@/components/ui/tabs';
 import { useBrands } from '@/features/catalog-edit/api/get-brands';
 import { BrandForm } from '@/features/catalog-edit/components/brand-form';
 import { BrandList } from '@/features/catalog-edit/components/brand-list';
-import { CatalogTabs, type TabDef } from '@/features/catalog-edit/components/catalog-tabs';
 import { NewPartForm } from '@/features/catalog-edit/components/new-part-form';
 import { PartEditor } from '@/features/catalog-edit/components/part-editor';
 import { PartFinder } from '@/features/catalog-edit/components/part-finder';
 
 type View = 'parts' | 'new' | 'brands';
-const TABS: readonly TabDef<View>[] = [
-  { id: 'parts', label: 'Parts' },
-  { id: 'new', label: 'New part' },
-  { id: 'brands', label: 'Brands' },
+const TABS: readonly TabItem<View>[] = [
+  { value: 'parts', label: 'Parts' },
+  { value: 'new', label: 'New part' },
+  { value: 'brands', label: 'Brands' },
 ];
 // As the API's route table has it for every catalog edit.
 const EDITORS: readonly Role[] = ['buyer', 'admin'];
-const isView = (v: string | null): v is View => TABS.some((t) => t.id === v);
+const isView = (v: string | null): v is View => TABS.some((t) => t.value === v);
 
 function PartsView({ partId, open }: { partId: string | null; open: (id: string | null) => void }) {
   return (
@@ -85,7 +85,7 @@ export function CatalogPage() {
       <PageHeader title="Catalog">
         <p className="text-sm text-ink-soft">Every save goes straight to the Counter&rsquo;s search.</p>
       </PageHeader>
-      <CatalogTabs tabs={TABS} value={view} onChange={(v) => go({ view: v })}>
+      <Tabs label="Catalog" items={TABS} value={view} onValueChange={(v) => go({ view: v })}>
         {view === 'parts' && <PartsView partId={partId} open={openPart} />}
         {view === 'new' && (
           <Panel title="New part">
@@ -108,7 +108,7 @@ export function CatalogPage() {
             </Panel>
           </div>
         )}
-      </CatalogTabs>
+      </Tabs>
     </>
   );
 }

@@ -1,5 +1,5 @@
 import type { FitReportBody } from '@shared/schemas/fit-reports';
-import { fieldErrorsOf } from '@/components/compat/field-errors';
+import { fieldErrorsOf } from '@/components/ui/field-errors';
 import { Button } from '@/components/ui/button';
 import { PageHeader, Panel } from '@/components/ui/panel';
 import { useCompareCoils } from '@/features/compare/api/compare-coils';

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { ErrorNote, PageHeader, Panel } from '@/components/ui/panel';
 import { useOutbox } from '@/features/outbox/api/get-outbox';
+import { formatDateTime } from '@shared/format';
 
 const URL_PATTERN = /(https?:\/\/[^\s<>"]+)/g;
 
@@ -43,7 +44,7 @@ export function OutboxPage() {
                   {m.subject} <span className="font-normal text-ink-soft">— to {m.to}</span>
                 </button>
               }
-              actions={<time className="text-xs text-ink-faint">{new Date(m.date).toLocaleString()}</time>}
+              actions={<time className="text-xs text-ink-faint">{formatDateTime(m.date)}</time>}
             >
               {open === i ? <MessageText text={m.text} /> : <p className="line-clamp-2 text-sm text-ink-soft">{m.text}</p>}
             </Panel>

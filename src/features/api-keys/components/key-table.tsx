@@ -3,8 +3,9 @@ import type { ApiKey } from '@shared/schemas/api-keys';
 import { Button } from '@/components/ui/button';
 import { ErrorNote } from '@/components/ui/panel';
 import { useRevokeApiKey } from '../api/revoke-api-key';
+import { formatDateTime } from '@shared/format';
 
-const when = (iso: string | null) => (iso ? new Date(iso).toLocaleString() : '—');
+const when = (iso: string | null) => (iso ? formatDateTime(iso) : '—');
 
 /** Revoking is final, so it asks once more in the row itself. */
 function RevokeButton({ apiKey }: { apiKey: ApiKey }) {

@@ -1,5 +1,5 @@
 import { StatusBadge, type Verdict } from '@/components/compat/verdict-badge';
-import { formatMeasure, formatRange } from '@/components/compat/format';
+import { formatMeasure, formatRange } from '@shared/format';
 import type { BenchVerdict } from '@shared/compat/bench-test';
 import type { BenchResult } from '@shared/schemas/bench';
 

@@ -4,10 +4,10 @@ import { fractionToPct } from '@shared/units';
 import { benchBodySchema, type BenchBody } from '@shared/schemas/bench';
 import { coilSpecSchema, type CoilSpec } from '@shared/schemas/specs';
 import { Cautions } from '@/components/compat/cautions';
-import { fieldErrorsOf, issuesByPath } from '@/components/compat/field-errors';
-import { formatMeasure, formatRange } from '@/components/compat/format';
+import { fieldErrorsOf, issuesByPath } from '@/components/ui/field-errors';
+import { formatMeasure, formatRange } from '@shared/format';
 import { Button } from '@/components/ui/button';
-import { UnitField } from '@/components/compat/unit-field';
+import { TextField } from '@/components/ui/field';
 import { Panel } from '@/components/ui/panel';
 import { useCoil } from '../api/get-coil';
 import { useRunBenchTest } from '../api/run-bench-test';
@@ -165,7 +165,7 @@ export function BenchTest() {
           ) : (
             <div className="grid grid-cols-2 gap-3">
               {WINDOW_FIELDS.map((f) => (
-                <UnitField
+                <TextField
                   key={f}
                   label={WINDOW_LABELS[f].label}
                   unit={WINDOW_LABELS[f].unit}
@@ -183,7 +183,7 @@ export function BenchTest() {
           <form aria-label="Bench readings" onSubmit={submit} noValidate className="flex flex-col gap-3">
             <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
               <div className="flex flex-col gap-1.5">
-                <UnitField
+                <TextField
                   label="Primary"
                   unit="Ω"
                   value={open ? '' : primary}
@@ -196,7 +196,7 @@ export function BenchTest() {
                   No reading (open)
                 </label>
               </div>
-              <UnitField
+              <TextField
                 label="Secondary"
                 unit="kΩ"
                 value={secondary}
@@ -204,7 +204,7 @@ export function BenchTest() {
                 hint="optional"
                 error={errorOf('measured.secondaryKohm')}
               />
-              <UnitField
+              <TextField
                 label="Coil temperature"
                 unit="°C"
                 value={temperature}

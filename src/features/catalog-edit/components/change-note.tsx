@@ -1,7 +1,6 @@
 import type { ReactNode } from 'react';
 import type { Change } from '../changes';
-
-const time = new Intl.DateTimeFormat('en-US', { hour: 'numeric', minute: '2-digit', second: '2-digit' });
+import { formatTime } from '@shared/format';
 
 /** What the last save changed, field by field, so the buyer sees the catalog took it. */
 export function ChangeNote({
@@ -20,7 +19,7 @@ export function ChangeNote({
   return (
     <div role="status" className="rounded-md border border-go/30 bg-go-soft/60 px-3 py-2 text-[15px]">
       <p className="font-semibold text-go">
-        {title} <span className="font-normal text-ink-soft">· {time.format(at)}</span>
+        {title} <span className="font-normal text-ink-soft">· {formatTime(at)}</span>
       </p>
       {changes.length === 0 ? (
         <p className="text-ink-soft">Nothing differed from what was on file.</p>

@@ -1,15 +1,14 @@
 import { useState, type FormEvent } from 'react';
 import { partStatusSchema, updatePartBodySchema, type UpdatePartBody } from '@shared/schemas/parts';
-import { issuesByPath } from '@/components/compat/field-errors';
+import { issuesByPath } from '@/components/ui/field-errors';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { SelectField, TextField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';
 import type { PartDetail } from '@shared/schemas/parts';
 import { useUpdatePart } from '../api/update-part';
 import { partChanges, type Change } from '../changes';
 import { fieldMessages, unplacedError } from '../field-messages';
 import { ChangeNote } from './change-note';
-import { ChoiceField } from './choice-field';
 import { Section } from './section';
 
 const FIELDS = ['description', 'status', 'gtin'] as const;
@@ -63,7 +62,7 @@ export function DetailsSection({ detail }: { detail: PartDetail }) {
           error={shown.description}
         />
         <div className="grid gap-3 sm:grid-cols-2">
-          <ChoiceField
+          <SelectField
             label="Status"
             value={status}
             onChange={(e) => setStatus(partStatusSchema.parse(e.target.value))}
@@ -74,7 +73,7 @@ export function DetailsSection({ detail }: { detail: PartDetail }) {
                 {s}
               </option>
             ))}
-          </ChoiceField>
+          </SelectField>
           <TextField
             label="GTIN"
             inputMode="numeric"

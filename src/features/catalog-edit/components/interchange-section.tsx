@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { createInterchangeBodySchema } from '@shared/schemas/interchange';
-import { issuesByPath } from '@/components/compat/field-errors';
+import { issuesByPath } from '@/components/ui/field-errors';
 import { VerdictBadge } from '@/components/compat/verdict-badge';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -12,10 +12,10 @@ import type { Change } from '../changes';
 import { fieldMessages, unplacedError } from '../field-messages';
 import { ChangeNote } from './change-note';
 import { Section } from './section';
+import { formatMeasure } from '@shared/format';
 
 const FIELDS = ['brand', 'number', 'source', 'confidence'] as const;
 const SOURCES = ['manual', 'supplier catalogue', 'maker cross-reference', 'bench-checked'];
-const pct = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
 
 /**
  * The other brands' numbers this part stands in for, and a row to add one: the foreign brand,
@@ -65,7 +65,7 @@ export function InterchangeSection({ detail, brands }: { detail: PartDetail; bra
             {
               what: 'Interchange',
               from: '—',
-              to: `${body.brand} ${body.number} (${body.source}, ${pct.format(body.confidence * 100)} % sure)`,
+              to: `${body.brand} ${body.number} (${body.source}, ${formatMeasure(body.confidence * 100, '%')} sure)`,
             },
           ],
         });
@@ -95,7 +95,7 @@ export function InterchangeSection({ detail, brands }: { detail: PartDetail; bra
                 <td className="py-1 pr-3">{r.brand}</td>
                 <td className="py-1 pr-3 font-mono font-semibold whitespace-nowrap">{r.number}</td>
                 <td className="py-1 pr-3 text-ink-soft">{r.source}</td>
-                <td className="py-1 pr-3 text-right whitespace-nowrap tabular-nums">{pct.format(r.confidence * 100)} %</td>
+                <td className="py-1 pr-3 text-right whitespace-nowrap tabular-nums">{formatMeasure(r.confidence * 100, '%')}</td>
                 <td className="py-1">
                   {r.check ? <VerdictBadge verdict={r.check.verdict} /> : <span className="text-sm text-ink-faint">not judged</span>}
                 </td>

@@ -1,9 +1,9 @@
 import { useId, useState, type FormEvent } from 'react';
 import { createPartBodySchema } from '@shared/schemas/parts';
 import { PART_KINDS, type PartKind } from '@shared/schemas/specs';
-import { issuesByPath } from '@/components/compat/field-errors';
+import { issuesByPath } from '@/components/ui/field-errors';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { SelectField, TextField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';
 import { useCreatePart } from '../api/create-part';
 import type { Brand } from '@shared/schemas/brands';
@@ -12,7 +12,6 @@ import { createdChanges } from '../changes';
 import { fieldMessages, unplacedError } from '../field-messages';
 import { emptySpecValues, parseSpec, specFieldsFor, type SpecValues } from '../spec-fields';
 import { ChangeNote } from './change-note';
-import { ChoiceField } from './choice-field';
 import { SpecFields } from './spec-fields';
 
 const FIELDS = ['brand', 'partNumber', 'kind', 'description', 'gtin'] as const;
@@ -103,7 +102,7 @@ export function NewPartForm({ brands, onOpen }: { brands: readonly Brand[]; onOp
     <form aria-label="Add a part" onSubmit={submit} noValidate className="flex flex-col gap-4">
       <div className="flex flex-wrap items-start gap-x-4 gap-y-3">
         <div className="w-64">
-          <ChoiceField
+          <SelectField
             label="Brand"
             value={brandName}
             onChange={(e) => setBrandName(e.target.value)}
@@ -129,7 +128,7 @@ export function NewPartForm({ brands, onOpen }: { brands: readonly Brand[]; onOp
                 ))}
               </optgroup>
             )}
-          </ChoiceField>
+          </SelectField>
         </div>
         <KindRadios value={kind} onChange={chooseKind} />
         <div className="w-60">

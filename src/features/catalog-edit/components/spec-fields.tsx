@@ -1,8 +1,7 @@
 import { useId } from 'react';
 import type { PartKind } from '@shared/schemas/specs';
-import { UnitField } from '@/components/compat/unit-field';
+import { SelectField, TextField } from '@/components/ui/field';
 import type { Brand } from '@shared/schemas/brands';
-import { ChoiceField } from './choice-field';
 import { specFieldsFor, specMessage, type SpecValues } from '../spec-fields';
 
 function Checkbox({ label, checked, onChange }: { label: string; checked: boolean; onChange: (v: boolean) => void }) {
@@ -32,7 +31,7 @@ function HeatCodeField({
 }) {
   const known = heatCodes.some((h) => h.code === value);
   return (
-    <ChoiceField
+    <SelectField
       label="Heat code"
       value={value}
       onChange={(e) => onChange(e.target.value)}
@@ -47,7 +46,7 @@ function HeatCodeField({
           {h.code} — heat step {h.heatStep}
         </option>
       ))}
-    </ChoiceField>
+    </SelectField>
   );
 }
 
@@ -71,7 +70,7 @@ export function SpecFields({
 }) {
   const set = (name: string, v: string | boolean) => onChange({ ...values, [name]: v });
   const fields = specFieldsFor(kind);
-  const boxes = fields.filter((f) => f.type === 'checkbox');
+  const boxes = fields.filter((f) => f.input === 'checkbox');
   return (
     <div className="flex flex-col gap-3">
       <div className="grid grid-cols-[repeat(auto-fill,minmax(11.5rem,1fr))] gap-x-3 gap-y-2.5">
@@ -80,8 +79,8 @@ export function SpecFields({
           const text = typeof v === 'string' ? v : '';
           const raw = errors[f.name];
           const error = raw === undefined ? undefined : specMessage(raw);
-          if (f.type === 'checkbox') return null;
-          if (f.type === 'heat-code')
+          if (f.input === 'checkbox') return null;
+          if (f.name === 'heatCode')
             return (
               <HeatCodeField
                 key={f.name}
@@ -92,25 +91,25 @@ export function SpecFields({
                 onChange={(c) => set(f.name, c)}
               />
             );
-          if (f.type === 'select')
+          if (f.input === 'select')
             return (
-              <ChoiceField key={f.name} label={f.label} value={text} onChange={(e) => set(f.name, e.target.value)} error={error}>
-                {f.options.map((o) => (
+              <SelectField key={f.name} label={f.label} value={text} onChange={(e) => set(f.name, e.target.value)} error={error}>
+                {(f.options ?? []).map((o) => (
                   <option key={o} value={o}>
                     {o}
                   </option>
                 ))}
-              </ChoiceField>
+              </SelectField>
             );
           return (
-            <UnitField
+            <TextField
               key={f.name}
               label={f.label}
-              unit={f.type === 'text' ? undefined : f.unit}
-              inputMode={f.type === 'text' ? 'text' : f.type === 'integer' ? 'numeric' : 'decimal'}
+              unit={f.unit}
+              inputMode={f.input === 'text' ? 'text' : f.input === 'integer' ? 'numeric' : 'decimal'}
               value={text}
               onChange={(e) => set(f.name, e.target.value)}
-              hint={f.hint ?? (f.type !== 'text' && f.optional ? 'optional' : undefined)}
+              hint={f.hint ?? (f.optional ? 'optional' : undefined)}
               error={error}
             />
           );

@@ -5,7 +5,7 @@ import { ErrorNote } from '@/components/ui/panel';
 import { useAlternates } from '../api/get-alternates';
 import type { Alternate } from '@shared/schemas/alternates';
 import { compareHref } from '../compare-link';
-import { yesNo } from '../format';
+import { yesNo } from '@shared/format';
 import { PriceNote } from './price-note';
 import { VerdictBadge } from '@/components/compat/verdict-badge';
 

@@ -1,6 +1,6 @@
 import type { CheckRow } from '@shared/schemas/compat';
 import { checkLabel } from '@/components/compat/check-labels';
-import { formatFigure } from '@/components/compat/format';
+import { formatFigure } from '@shared/format';
 import { VerdictBadge } from '@/components/compat/verdict-badge';
 
 /**

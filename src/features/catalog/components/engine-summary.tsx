@@ -1,5 +1,5 @@
 import type { Engine } from '@shared/schemas/vehicles';
-import { formatMeasure, formatNumber, UNITS } from '../format';
+import { formatMeasure, formatNumber, UNITS } from '@shared/format';
 
 /** The engine figures a substitute is judged against, on one line. */
 export function EngineSummary({ engine }: { engine: Engine }) {

@@ -4,7 +4,7 @@ import { checkLabel } from '@/components/compat/check-labels';
 import { VerdictBadge } from '@/components/compat/verdict-badge';
 import type { InterchangeRow } from '@shared/schemas/parts';
 import { compareHref } from '../compare-link';
-import { formatPercent } from '../format';
+import { formatPercent } from '@shared/format';
 
 /**
  * The foreign numbers this part stands in for, where each claim came from, and the verdict of

@@ -1,5 +1,5 @@
 import type { Price } from '@shared/schemas/parts';
-import { formatMoney } from '../format';
+import { formatMoney } from '@shared/format';
 
 /** The sell price, with the core charge when the part carries one. */
 export function PriceNote({ price, large = false }: { price: Price | null; large?: boolean }) {

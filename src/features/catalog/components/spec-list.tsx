@@ -1,44 +1,48 @@
 import type { ReactNode } from 'react';
-import type { CoilSpec, ResolvedPlugSpec } from '@shared/schemas/specs';
-import { isCoilSpec, type PartSpec } from '@shared/schemas/specs';
-import { formatMeasure, formatNumber, formatRange, UNITS, yesNo } from '../format';
+import { formatRange } from '@shared/format';
+import { HEAT_STEP_MAX, isCoilSpec, type CoilSpec, type PartSpec, type ResolvedPlugSpec } from '@shared/schemas/specs';
+import { formatSpecValue, specField, specLabel } from '@shared/spec-fields';
 
 type Row = [term: string, value: ReactNode];
 
 const NOT_GIVEN = <span className="text-ink-faint">not given</span>;
-const DRIVER_WORDS = { integrated: 'integrated igniter', external: 'external driver' } as const;
+
+const label = (name: string): string => specLabel(name);
+const quantity = (name: string): string => specField(name)?.quantity ?? specLabel(name);
+const figure = (name: string, value: unknown): string => formatSpecValue(name, value);
+
+function windowOf(min: number | null | undefined, max: number | null | undefined, name: string): ReactNode {
+  if (min == null || max == null) return NOT_GIVEN;
+  const f = specField(name);
+  return formatRange(min, max, f?.unit ?? '', f?.decimals);
+}
 
 function coilRows(s: CoilSpec): Row[] {
   return [
-    ['Architecture', s.architecture],
-    ['Driver', DRIVER_WORDS[s.driver]],
-    ['Outputs', s.outputs],
+    [label('architecture'), figure('architecture', s.architecture)],
+    [label('driver'), figure('driver', s.driver)],
+    [label('outputs'), s.outputs],
     ['Connector', `${s.connectorPins}-pin, key ${s.connectorKey}`],
-    ['Primary resistance', formatRange(s.primaryOhmMin, s.primaryOhmMax, UNITS.ohm)],
-    ['Primary inductance', formatMeasure(s.primaryInductanceMh, UNITS.mh)],
-    [
-      'Secondary resistance',
-      s.secondaryKohmMin != null && s.secondaryKohmMax != null
-        ? formatRange(s.secondaryKohmMin, s.secondaryKohmMax, UNITS.kohm, 1)
-        : NOT_GIVEN,
-    ],
-    ['Turns ratio', `${formatNumber(s.turnsRatio, 1)}:1`],
-    ['Available voltage', s.availableKv != null ? formatMeasure(s.availableKv, UNITS.kv, 1) : NOT_GIVEN],
-    ['Peak current', formatMeasure(s.peakCurrentA, UNITS.amp, 1)],
+    [quantity('primaryOhmMin'), windowOf(s.primaryOhmMin, s.primaryOhmMax, 'primaryOhmMin')],
+    [label('primaryInductanceMh'), figure('primaryInductanceMh', s.primaryInductanceMh)],
+    [quantity('secondaryKohmMin'), windowOf(s.secondaryKohmMin, s.secondaryKohmMax, 'secondaryKohmMin')],
+    [label('turnsRatio'), figure('turnsRatio', s.turnsRatio)],
+    [label('availableKv'), s.availableKv != null ? figure('availableKv', s.availableKv) : NOT_GIVEN],
+    [label('peakCurrentA'), figure('peakCurrentA', s.peakCurrentA)],
   ];
 }
 
 function plugRows(s: ResolvedPlugSpec): Row[] {
   return [
-    ['Thread', `${formatMeasure(s.threadMm, UNITS.mm)} × ${formatMeasure(s.threadPitchMm, UNITS.mm)} pitch`],
-    ['Reach', formatMeasure(s.reachMm, UNITS.mm)],
-    ['Seat', s.seat],
-    ['Hex', formatMeasure(s.hexMm, UNITS.mm)],
-    ['Heat step', `${s.heatStep} of 15${s.heatCode ? ` (brand code ${s.heatCode})` : ''}`],
-    ['Gap', `${formatMeasure(s.gapMm, UNITS.mm)}${s.regappable ? ', can be re-gapped' : ', do not re-gap'}`],
-    ['Resistor', s.resistor ? `yes${s.resistorKohm != null ? `, ${formatMeasure(s.resistorKohm, UNITS.kohm, 1)}` : ''}` : 'no'],
-    ['Projected tip', yesNo(s.projectedTip)],
-    ['Electrode', s.electrode],
+    [label('threadMm'), `${figure('threadMm', s.threadMm)} × ${figure('threadPitchMm', s.threadPitchMm)} pitch`],
+    [label('reachMm'), figure('reachMm', s.reachMm)],
+    [label('seat'), s.seat],
+    [label('hexMm'), figure('hexMm', s.hexMm)],
+    [label('heatStep'), `${s.heatStep} of ${HEAT_STEP_MAX}${s.heatCode ? ` (brand code ${s.heatCode})` : ''}`],
+    [label('gapMm'), `${figure('gapMm', s.gapMm)}${s.regappable ? ', can be re-gapped' : ', do not re-gap'}`],
+    [label('resistor'), s.resistor ? `yes${s.resistorKohm != null ? `, ${figure('resistorKohm', s.resistorKohm)}` : ''}` : 'no'],
+    [label('projectedTip'), figure('projectedTip', s.projectedTip)],
+    [label('electrode'), s.electrode],
   ];
 }
 

@@ -1,5 +1,5 @@
 import type { StockView } from '@shared/schemas/parts';
-import { yesNo } from '../format';
+import { yesNo } from '@shared/format';
 
 /** On hand and bin for the store's staff; in stock yes/no for a shop's technician. */
 export function StockNote({ stock }: { stock: StockView }) {

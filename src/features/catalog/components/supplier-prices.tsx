@@ -1,5 +1,5 @@
 import type { Price } from '@shared/schemas/parts';
-import { formatMoney, formatPercent } from '../format';
+import { formatMoney, formatPercent } from '@shared/format';
 
 /** Each supplier's prices; cost and margin columns appear only when the server sent them (buyers, admins). */
 export function SupplierPrices({ prices }: { prices: Price[] }) {

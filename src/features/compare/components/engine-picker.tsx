@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { formatMeasure } from '@/components/compat/format';
+import { formatMeasure } from '@shared/format';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { Panel } from '@/components/ui/panel';

@@ -1,8 +1,7 @@
 import { useId, useState, type FormEvent } from 'react';
 import type { CoilSpec, PartKind, ResolvedPlugSpec } from '@shared/schemas/specs';
 import { Button } from '@/components/ui/button';
-import { UnitField } from '@/components/compat/unit-field';
-import { SelectField } from '@/components/ui/field';
+import { SelectField, TextField } from '@/components/ui/field';
 import { fieldsFor, parseCoilSpec, parsePlugSpec, specMessage, type FormValues } from '../spec-fields';
 
 export type TypedSpec = { kind: 'coil'; spec: CoilSpec } | { kind: 'plug'; spec: ResolvedPlugSpec };
@@ -64,9 +63,9 @@ export function SpecForm({
           const server = serverErrors[f.name];
           const error = errors[f.name] ?? (server ? specMessage(server) : undefined);
           const v = values[f.name];
-          if (f.type === 'checkbox')
+          if (f.input === 'checkbox')
             return <CheckboxField key={f.name} label={f.label} checked={v === true} onChange={(c) => set(f.name, c)} />;
-          if (f.type === 'select') {
+          if (f.input === 'select') {
             return (
               <SelectField
                 key={f.name}
@@ -74,7 +73,7 @@ export function SpecForm({
                 value={typeof v === 'string' ? v : ''}
                 onChange={(e) => set(f.name, e.target.value)}
               >
-                {f.options.map((o) => (
+                {(f.options ?? []).map((o) => (
                   <option key={o} value={o}>
                     {o}
                   </option>
@@ -83,14 +82,14 @@ export function SpecForm({
             );
           }
           return (
-            <UnitField
+            <TextField
               key={f.name}
               label={f.label}
-              unit={f.type === 'text' ? undefined : f.unit}
-              inputMode={f.type === 'text' ? 'text' : 'decimal'}
+              unit={f.unit}
+              inputMode={f.input === 'text' ? 'text' : 'decimal'}
               value={typeof v === 'string' ? v : ''}
               onChange={(e) => set(f.name, e.target.value)}
-              hint={'hint' in f ? f.hint : f.type !== 'text' && f.optional ? 'optional' : undefined}
+              hint={f.hint ?? (f.optional ? 'optional' : undefined)}
               error={error}
             />
           );

@@ -1,5 +1,5 @@
 import type { CoilSpec, ResolvedPlugSpec } from '@shared/schemas/specs';
-import { formatMeasure, formatRange } from '@/components/compat/format';
+import { formatMeasure, formatRange } from '@shared/format';
 
 const isCoil = (spec: CoilSpec | ResolvedPlugSpec): spec is CoilSpec => 'architecture' in spec;
 

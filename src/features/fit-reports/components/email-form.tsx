@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
-import { fieldErrorsOf } from '@/components/compat/field-errors';
+import { fieldErrorsOf } from '@/components/ui/field-errors';
 import { useEmailFitReport } from '../api/email-fit-report';
 
 /** E-mails the report (its verdict rows and the share link) to a customer or a colleague. */

@@ -1,7 +1,6 @@
 import type { FitReport } from '@shared/schemas/fit-reports';
 import { CompatResultView } from '@/components/compat/compat-result-view';
-
-const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'long', timeStyle: 'short' });
+import { formatDateTime } from '@shared/format';
 
 /** The report itself, the same on screen, in its shared read-only view and on paper. */
 export function FitReportDocument({ report }: { report: FitReport }) {
@@ -17,8 +16,7 @@ export function FitReportDocument({ report }: { report: FitReport }) {
             <h2 className="text-xl font-semibold text-ink">{report.title}</h2>
             <p className="text-sm text-ink-soft">
               Saved by {report.createdBy}
-              {report.shopName ? `, ${report.shopName}` : ''} on{' '}
-              <time dateTime={report.createdAt}>{when.format(new Date(report.createdAt))}</time>
+              {report.shopName ? `, ${report.shopName}` : ''} on <time dateTime={report.createdAt}>{formatDateTime(report.createdAt)}</time>
             </p>
             {report.notes && <p className="mt-1 whitespace-pre-wrap text-[15px] text-ink">{report.notes}</p>}
           </header>

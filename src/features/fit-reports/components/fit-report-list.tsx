@@ -1,8 +1,8 @@
 import { Link } from 'react-router-dom';
 import { VerdictBadge } from '@/components/compat/verdict-badge';
 import type { FitReportSummary } from '@shared/schemas/fit-reports';
+import { formatDateTime } from '@shared/format';
 
-const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
 const KIND_LABEL = { coil: 'coil', plug: 'plug' } as const;
 
 export function FitReportList({ reports }: { reports: readonly FitReportSummary[] }) {
@@ -47,7 +47,7 @@ export function FitReportList({ reports }: { reports: readonly FitReportSummary[
               <td className="py-2 pr-3">{r.createdBy}</td>
               <td className="py-2 pr-3 text-ink-soft">{r.shopName ?? 'the store'}</td>
               <td className="py-2 whitespace-nowrap text-ink-soft">
-                <time dateTime={r.createdAt}>{when.format(new Date(r.createdAt))}</time>
+                <time dateTime={r.createdAt}>{formatDateTime(r.createdAt)}</time>
               </td>
             </tr>
           ))}

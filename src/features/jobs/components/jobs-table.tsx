@@ -2,8 +2,9 @@ import { JOB_LABELS, type JobSummary } from '@shared/schemas/jobs';
 import { Button } from '@/components/ui/button';
 import { ErrorNote } from '@/components/ui/panel';
 import { useRetryJob } from '../api/retry-job';
+import { formatDateTime } from '@shared/format';
 
-const when = (iso: string | null) => (iso ? new Date(iso).toLocaleString() : '—');
+const when = (iso: string | null) => (iso ? formatDateTime(iso) : '—');
 
 export function JobsTable({ jobs }: { jobs: JobSummary[] }) {
   const retry = useRetryJob();

@@ -3,9 +3,10 @@ import { isDefusedFormula } from '@shared/price-list/formula-text';
 import type { PriceListChange, PriceListChangeType, SupersessionState } from '@shared/schemas/price-lists';
 import { ErrorNote } from '@/components/ui/panel';
 import { usePriceListChanges } from '../api/get-price-list-changes';
-import { formatMoney, formatPercentChange, percentChange } from '../format';
+import { formatMoney, formatPercentChange } from '@shared/format';
+import { percentChange } from '../format';
 import { FlagMark } from './flag-mark';
-import { Pager } from './pager';
+import { Pager } from '@/components/ui/pager';
 
 const PAGE = 50;
 

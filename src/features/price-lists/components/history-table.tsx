@@ -2,7 +2,8 @@ import { FIELD_LABELS } from '@shared/price-list/fields';
 import type { Mapping } from '@shared/price-list/mapping';
 import { Button } from '@/components/ui/button';
 import type { PriceList } from '@shared/schemas/price-lists';
-import { formatCount, formatWhen, shortHash } from '../format';
+import { formatCount, formatDateTime } from '@shared/format';
+import { shortHash } from '../format';
 
 const STATUS_TEXT: Record<PriceList['status'], string> = {
   processing: 'reading',
@@ -64,7 +65,7 @@ export function HistoryTable({ lists, openId, onOpen }: { lists: PriceList[]; op
         <tbody>
           {lists.map((l) => (
             <tr key={l.id} className={`border-b border-ink/5 align-top ${l.id === openId ? 'bg-accent-soft/50' : ''}`}>
-              <td className="whitespace-nowrap py-1.5 pr-3">{formatWhen(l.committedAt ?? l.discardedAt ?? l.createdAt)}</td>
+              <td className="whitespace-nowrap py-1.5 pr-3">{formatDateTime(l.committedAt ?? l.discardedAt ?? l.createdAt)}</td>
               <td className="whitespace-nowrap py-1.5 pr-3">{(l.committedBy ?? l.createdBy)?.name ?? '—'}</td>
               <td className="max-w-56 truncate py-1.5 pr-3" title={l.fileName}>
                 {l.fileName}

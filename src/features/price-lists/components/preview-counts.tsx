@@ -1,5 +1,5 @@
 import type { PriceListCounts } from '@shared/schemas/price-lists';
-import { formatCount } from '../format';
+import { formatCount } from '@shared/format';
 import { FlagMark } from './flag-mark';
 
 interface Tile {

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { ErrorNote } from '@/components/ui/panel';
 import { priceListErrorsCsvUrl, usePriceListErrors } from '../api/get-price-list-errors';
-import { Pager } from './pager';
+import { Pager } from '@/components/ui/pager';
 
 const PAGE = 50;
 

@@ -1,6 +1,6 @@
 import { useId, useState, type FormEvent } from 'react';
 import { DEFAULT_SETTINGS, type Settings } from '@shared/schemas/settings';
-import { fieldErrorsOf } from '@/components/compat/field-errors';
+import { fieldErrorsOf } from '@/components/ui/field-errors';
 import { Button } from '@/components/ui/button';
 import { Panel } from '@/components/ui/panel';
 import {

@@ -3,11 +3,11 @@ import { Button } from '@/components/ui/button';
 import { ErrorNote } from '@/components/ui/panel';
 import { useUpdateSupplier } from '../api/update-supplier';
 import type { Supplier } from '@shared/schemas/suppliers';
+import { formatDate } from '@shared/format';
 
 const CELL_INPUT = 'w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 text-[15px] focus:border-accent';
 
-const day = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' });
-const lastList = (iso: string | null): string => (iso === null ? 'none yet' : day.format(new Date(iso)));
+const lastList = (iso: string | null): string => (iso === null ? 'none yet' : formatDate(iso));
 
 const blankToNull = (s: string): string | null => (s.trim() === '' ? null : s.trim());
 

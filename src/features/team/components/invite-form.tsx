@@ -1,67 +1,50 @@
-import { useState, type FormEvent } from 'react';
-import { ROLES, type Role } from '@shared/roles';
+import { inviteBodySchema } from '@shared/schemas/users';
+import { ROLES } from '@shared/roles';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
-import { ErrorNote } from '@/components/ui/panel';
+import { Field, FieldSelect, Form, useSchemaForm } from '@/components/ui/form';
 import { useShops } from '../api/get-shops';
 import { useInviteUser } from '../api/invite-user';
 
+/** Invite someone by e-mail: checked with the API's own schema before it is sent. */
 export function InviteForm() {
-  const [email, setEmail] = useState('');
-  const [name, setName] = useState('');
-  const [role, setRole] = useState<Role>('clerk');
-  const [shopId, setShopId] = useState('');
+  const form = useSchemaForm(inviteBodySchema, { defaultValues: { name: '', email: '', role: 'clerk', shopId: null } });
   const shops = useShops();
   const invite = useInviteUser();
+  const role = form.watch('role');
+  const technician = role === 'technician';
 
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    invite.mutate(
-      { email, name, role, shopId: role === 'technician' ? shopId : null },
-      {
-        onSuccess: () => {
-          setEmail('');
-          setName('');
-        },
-      },
-    );
-  };
   return (
-    <form onSubmit={submit} className="grid gap-3 sm:grid-cols-2 lg:grid-cols-5 lg:items-end" aria-label="Invite a user">
-      <TextField label="Name" required value={name} onChange={(e) => setName(e.target.value)} />
-      <TextField label="E-mail" type="email" required value={email} onChange={(e) => setEmail(e.target.value)} />
-      <SelectField label="Role" value={role} onChange={(e) => setRole(e.target.value as Role)}>
-        {ROLES.map((r) => (
-          <option key={r} value={r}>
-            {r}
-          </option>
-        ))}
-      </SelectField>
-      <SelectField
+    <Form
+      form={form}
+      serverError={invite.error}
+      onSubmit={(body) =>
+        invite.mutate(
+          { ...body, shopId: body.role === 'technician' ? body.shopId : null },
+          { onSuccess: () => form.reset({ name: '', email: '', role: body.role, shopId: body.shopId ?? null }) },
+        )
+      }
+      aria-label="Invite a user"
+      className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[repeat(4,minmax(0,1fr))_auto] lg:items-start"
+    >
+      <Field name="name" label="Name" autoComplete="off" />
+      <Field name="email" label="E-mail" type="email" autoComplete="off" />
+      <FieldSelect name="role" label="Role" options={ROLES} />
+      <FieldSelect
+        name="shopId"
         label="Shop"
-        value={shopId}
-        disabled={role !== 'technician'}
-        required={role === 'technician'}
-        onChange={(e) => setShopId(e.target.value)}
-      >
-        <option value="">{role === 'technician' ? 'Choose a shop' : '— (store staff)'}</option>
-        {shops.data?.map((s) => (
-          <option key={s.id} value={s.id}>
-            {s.name}
-          </option>
-        ))}
-      </SelectField>
-      <Button type="submit" disabled={invite.isPending}>
+        blank="null"
+        disabled={!technician}
+        placeholder={technician ? 'Choose a shop' : '— (store staff)'}
+        options={(shops.data ?? []).map((s) => ({ value: s.id, label: s.name }))}
+      />
+      <Button type="submit" disabled={invite.isPending} className="lg:mt-5">
         Send invitation
       </Button>
-      <div className="sm:col-span-2 lg:col-span-5">
-        <ErrorNote error={invite.error} />
-        {invite.isSuccess && (
-          <p className="text-sm text-go" role="status">
-            Invitation sent. The link works once, for 72 hours.
-          </p>
-        )}
-      </div>
-    </form>
+      {invite.isSuccess && !form.formState.isDirty && (
+        <p className="text-sm text-go sm:col-span-2 lg:col-span-5" role="status">
+          Invitation sent. The link works once, for 72 hours.
+        </p>
+      )}
+    </Form>
   );
 }

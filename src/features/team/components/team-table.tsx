@@ -1,69 +1,113 @@
+import { createColumnHelper } from '@tanstack/react-table';
+import { useMemo, useState } from 'react';
 import { ROLES, type Role } from '@shared/roles';
 import type { TeamMember } from '@shared/schemas/users';
 import { Button } from '@/components/ui/button';
+import { DataTable } from '@/components/ui/data-table';
+import { ConfirmDialog } from '@/components/ui/dialog';
 import { ErrorNote } from '@/components/ui/panel';
 import { useUpdateUser } from '../api/update-user';
 
+const column = createColumnHelper<TeamMember>();
+
+/** What an admin is about to do to someone, waiting for the confirmation. */
+type Pending = { user: TeamMember; role: Role } | { user: TeamMember; disable: true };
+
+function Status({ user }: { user: TeamMember }) {
+  if (user.disabled) return <span className="text-nogo">disabled</span>;
+  if (user.invitePending) return <span className="text-review">invited</span>;
+  return <>active</>;
+}
+
+/**
+ * The people of the store and its shops, sortable by name and role. A role change or a
+ * disable signs the person out at once, so each asks first; enabling does not.
+ */
 export function TeamTable({ users, selfId }: { users: TeamMember[]; selfId: string }) {
   const update = useUpdateUser();
+  const { mutate } = update;
+  const [pending, setPending] = useState<Pending | null>(null);
+
+  const columns = useMemo(
+    () => [
+      column.accessor('name', { header: 'Name', enableSorting: true, meta: { cellClassName: 'font-medium' } }),
+      column.accessor('email', { header: 'E-mail', meta: { cellClassName: 'text-ink-soft' } }),
+      column.accessor('role', {
+        header: 'Role',
+        enableSorting: true,
+        cell: ({ row: { original: u } }) => (
+          <>
+            <label className="sr-only" htmlFor={`role-${u.id}`}>
+              Role of {u.name}
+            </label>
+            <select
+              id={`role-${u.id}`}
+              value={u.role}
+              disabled={u.id === selfId || u.role === 'technician'}
+              onChange={(e) => setPending({ user: u, role: e.target.value as Role })}
+              className="rounded border border-ink/20 bg-paper-raised px-2 py-1"
+            >
+              {ROLES.filter((r) => r !== 'technician' || u.role === 'technician').map((r) => (
+                <option key={r} value={r}>
+                  {r}
+                </option>
+              ))}
+            </select>
+          </>
+        ),
+      }),
+      column.accessor((u) => u.shopName ?? '—', { id: 'shop', header: 'Shop', meta: { cellClassName: 'text-ink-soft' } }),
+      column.display({ id: 'status', header: 'Status', cell: ({ row }) => <Status user={row.original} /> }),
+      column.display({
+        id: 'actions',
+        header: () => <span className="sr-only">Actions</span>,
+        meta: { align: 'right' },
+        cell: ({ row: { original: u } }) =>
+          u.id === selfId ? null : u.disabled ? (
+            <Button variant="secondary" onClick={() => mutate({ id: u.id, disabled: false })}>
+              Enable
+            </Button>
+          ) : (
+            <Button variant="danger" onClick={() => setPending({ user: u, disable: true })}>
+              Disable
+            </Button>
+          ),
+      }),
+    ],
+    [selfId, mutate],
+  );
+
+  const name = pending?.user.name ?? '';
   return (
     <>
-      <ErrorNote error={update.error} />
-      <table className="w-full text-left text-[15px]">
-        <thead className="border-b border-ink/10 text-xs uppercase tracking-wide text-ink-soft">
-          <tr>
-            <th className="py-2 pr-3">Name</th>
-            <th className="py-2 pr-3">E-mail</th>
-            <th className="py-2 pr-3">Role</th>
-            <th className="py-2 pr-3">Shop</th>
-            <th className="py-2 pr-3">Status</th>
-            <th className="py-2" />
-          </tr>
-        </thead>
-        <tbody>
-          {users.map((u) => (
-            <tr key={u.id} className="border-b border-ink/5">
-              <td className="py-2 pr-3 font-medium">{u.name}</td>
-              <td className="py-2 pr-3 text-ink-soft">{u.email}</td>
-              <td className="py-2 pr-3">
-                <label className="sr-only" htmlFor={`role-${u.id}`}>
-                  Role of {u.name}
-                </label>
-                <select
-                  id={`role-${u.id}`}
-                  value={u.role}
-                  disabled={u.id === selfId || u.role === 'technician'}
-                  onChange={(e) => update.mutate({ id: u.id, role: e.target.value as Role })}
-                  className="rounded border border-ink/20 bg-paper-raised px-2 py-1"
-                >
-                  {ROLES.filter((r) => r !== 'technician' || u.role === 'technician').map((r) => (
-                    <option key={r} value={r}>
-                      {r}
-                    </option>
-                  ))}
-                </select>
-              </td>
-              <td className="py-2 pr-3 text-ink-soft">{u.shopName ?? '—'}</td>
-              <td className="py-2 pr-3">
-                {u.disabled ? (
-                  <span className="text-nogo">disabled</span>
-                ) : u.invitePending ? (
-                  <span className="text-review">invited</span>
-                ) : (
-                  'active'
-                )}
-              </td>
-              <td className="py-2 text-right">
-                {u.id !== selfId && (
-                  <Button variant={u.disabled ? 'secondary' : 'danger'} onClick={() => update.mutate({ id: u.id, disabled: !u.disabled })}>
-                    {u.disabled ? 'Enable' : 'Disable'}
-                  </Button>
-                )}
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      <DataTable label="People" data={users} columns={columns} getRowId={(u) => u.id} initialSorting={[{ id: 'name', desc: false }]} />
+      {/* A failed enable; a confirmed change that fails says so in its dialog. */}
+      {!pending && <ErrorNote error={update.error} />}
+      <ConfirmDialog
+        open={pending !== null}
+        onOpenChange={(open) => {
+          if (open) return;
+          setPending(null);
+          update.reset();
+        }}
+        title={pending && 'role' in pending ? `Make ${name} ${article(pending.role)} ${pending.role}?` : `Disable ${name}?`}
+        confirmLabel={pending && 'role' in pending ? `Make ${pending.role}` : `Disable ${name}`}
+        tone={pending && 'role' in pending ? 'primary' : 'danger'}
+        onConfirm={() =>
+          pending &&
+          update.mutateAsync('role' in pending ? { id: pending.user.id, role: pending.role } : { id: pending.user.id, disabled: true })
+        }
+      >
+        {pending && 'role' in pending ? (
+          <p>
+            {name} is signed out at once and signs in again as {article(pending.role)} {pending.role}, with what that role may see and do.
+          </p>
+        ) : (
+          <p>{name} is signed out at once and cannot sign in until an admin enables them again. Nothing they did is removed.</p>
+        )}
+      </ConfirmDialog>
     </>
   );
 }
+
+const article = (word: string): string => (/^[aeiou]/.test(word) ? 'an' : 'a');

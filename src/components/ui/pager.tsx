@@ -1,5 +1,5 @@
 import { Button } from '@/components/ui/button';
-import { formatCount } from '../format';
+import { formatCount } from '@shared/format';
 
 export function Pager({ offset, limit, total, onOffset }: { offset: number; limit: number; total: number; onOffset: (o: number) => void }) {
   if (total <= limit) return null;

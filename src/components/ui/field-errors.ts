@@ -1,5 +1,7 @@
 import type { z } from 'zod';
-import { fieldIssuesSchema } from '@shared/schemas/error';
+import { fieldIssuesSchema, type FieldIssue } from '@shared/schemas/error';
+import { specField } from '@shared/spec-fields';
+import { readsOnFromField } from '@shared/validation/field-issues';
 import { ApiError } from '@/lib/api-client';
 
 /**
@@ -8,12 +10,9 @@ import { ApiError } from '@/lib/api-client';
  * (the whole side) is keyed ''.
  */
 export function fieldErrorsOf(error: unknown, prefix = ''): Record<string, string> {
-  if (!(error instanceof ApiError)) return {};
   // The API's 400 names each bad field: `details: [{ field: 'substitute.spec.primaryOhmMin', message }]`.
-  const parsed = fieldIssuesSchema.safeParse(error.details);
-  if (!parsed.success) return {};
   const out: Record<string, string> = {};
-  for (const { field, message } of parsed.data) {
+  for (const { field, message } of apiFieldIssues(error) ?? []) {
     if (prefix === '' || field === prefix) out[prefix === '' ? field : ''] ??= message;
     else if (field.startsWith(`${prefix}.`)) out[field.slice(prefix.length + 1)] ??= message;
   }
@@ -36,4 +35,25 @@ export function inFormWords(message: string, labelOf: (key: string) => string | 
     const label = labelOf(key);
     return label ? `“${label}”` : key;
   });
+}
+
+/**
+ * A field's message as it reads under the field, in the same words the API uses
+ * (shared/validation): a `plainWords` phrase reads on from the field's label ("Reach must be at
+ * most 40"); a sentence a schema wrote keeps its words, with the field names in it turned into
+ * labels ("“Primary resistance, min” must not exceed “Primary resistance, max”").
+ */
+export function labelledMessage(label: string, message: string, labelOf: (key: string) => string | undefined = specLabelOf): string {
+  if (readsOnFromField(message)) return `${label} ${message}`;
+  const words = inFormWords(message, labelOf);
+  return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
+const specLabelOf = (key: string): string | undefined => specField(key)?.label;
+
+/** The `{ field, message }` list of an API error that names fields, or null when it names none. */
+export function apiFieldIssues(error: unknown): FieldIssue[] | null {
+  if (!(error instanceof ApiError)) return null;
+  const parsed = fieldIssuesSchema.safeParse(error.details);
+  return parsed.success && parsed.data.length > 0 ? parsed.data : null;
 }

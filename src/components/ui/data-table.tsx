@@ -1,0 +1,229 @@
+import {
+  flexRender,
+  getCoreRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type Header,
+  type OnChangeFn,
+  type RowData,
+  type SortingState,
+  type TableOptions,
+  type VisibilityState,
+} from '@tanstack/react-table';
+import { useImperativeHandle, useRef, useState, type KeyboardEvent, type ReactNode, type Ref } from 'react';
+
+/**
+ * Every table of the app: TanStack Table for the rows and columns, this file for the markup.
+ * Columns are TanStack column definitions (createColumnHelper); a column sorts only when it says
+ * `enableSorting: true`. On a narrow screen the table scrolls sideways inside its own labelled
+ * region, so the page never gets wider than the phone.
+ */
+
+declare module '@tanstack/react-table' {
+  // eslint-disable-next-line @typescript-eslint/no-unused-vars -- the names must match TanStack's declaration
+  interface ColumnMeta<TData extends RowData, TValue> {
+    /** Figures line up on the right. */
+    align?: 'right';
+    /** Classes for the column's cells (not its header). */
+    cellClassName?: string;
+  }
+}
+
+export interface DataTableHandle {
+  /** Puts the keyboard on the selected row (the first when none is). Only with `onRowOpen`. */
+  focusSelected(): void;
+}
+
+export interface DataTableProps<T> {
+  /** Names the table and its scroll region for a screen reader ("Team", "Search results"). */
+  label: string;
+  data: T[];
+  columns: TableOptions<T>['columns'];
+  getRowId: (row: T) => string;
+  /** Shown instead of the table when there are no rows. */
+  empty?: ReactNode;
+  /** Sorting the table keeps itself, starting here. */
+  initialSorting?: SortingState;
+  /** Sorting kept by the caller (rows sorted by the server): give both, and the rows arrive sorted. */
+  sorting?: SortingState;
+  onSortingChange?: OnChangeFn<SortingState>;
+  columnVisibility?: VisibilityState;
+  /**
+   * Makes the rows a keyboard grid: one tab stop (the selected row), ↑/↓, PageUp/PageDown,
+   * Home/End move the selection, Enter, Space or a click open the row.
+   */
+  onRowOpen?: (row: T) => void;
+  /** The opened row, marked for sight and for screen readers (aria-current). */
+  openRowId?: string | null;
+  /** ↑ on the first row: give the keyboard back (to a search box). */
+  onLeaveTop?: () => void;
+  rowClassName?: (row: T) => string;
+  ref?: Ref<DataTableHandle>;
+}
+
+// Keys that move the selection, and by how many rows.
+const STEP: Record<string, number> = { ArrowDown: 1, ArrowUp: -1, PageDown: 10, PageUp: -10 };
+
+const ARIA_SORT = { asc: 'ascending', desc: 'descending' } as const;
+
+function HeaderCell<T>({ header }: { header: Header<T, unknown> }) {
+  const column = header.column;
+  const align = column.columnDef.meta?.align === 'right' ? 'text-right' : '';
+  const content = header.isPlaceholder ? null : flexRender(column.columnDef.header, header.getContext());
+  if (!column.getCanSort())
+    return (
+      <th scope="col" className={`px-2 py-2 font-semibold whitespace-nowrap ${align}`}>
+        {content}
+      </th>
+    );
+  const sorted = column.getIsSorted();
+  return (
+    <th scope="col" aria-sort={sorted ? ARIA_SORT[sorted] : 'none'} className={`px-1 py-1 font-semibold whitespace-nowrap ${align}`}>
+      <button
+        type="button"
+        onClick={column.getToggleSortingHandler()}
+        className="inline-flex items-center gap-1 rounded px-1 py-1 uppercase tracking-wide hover:bg-paper-sunk hover:text-ink"
+      >
+        {content}
+        <span aria-hidden="true" className={sorted ? 'text-accent-strong' : 'text-ink-faint'}>
+          {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
+        </span>
+      </button>
+    </th>
+  );
+}
+
+export function DataTable<T>({
+  label,
+  data,
+  columns,
+  getRowId,
+  empty = 'Nothing to show.',
+  initialSorting = [],
+  sorting,
+  onSortingChange,
+  columnVisibility,
+  onRowOpen,
+  openRowId = null,
+  onLeaveTop,
+  rowClassName,
+  ref,
+}: DataTableProps<T>) {
+  const [ownSorting, setOwnSorting] = useState<SortingState>(initialSorting);
+  const manual = sorting !== undefined;
+  const table = useReactTable({
+    data,
+    columns,
+    getRowId: (row) => getRowId(row),
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    manualSorting: manual,
+    defaultColumn: { enableSorting: false },
+    state: { sorting: sorting ?? ownSorting, ...(columnVisibility ? { columnVisibility } : {}) },
+    onSortingChange: onSortingChange ?? setOwnSorting,
+  });
+  const rows = table.getRowModel().rows;
+
+  // Keyboard grid: which row holds the one tab stop.
+  const [selectedId, setSelectedId] = useState<string | null>(null);
+  const rowEls = useRef(new Map<string, HTMLTableRowElement>());
+  const selected = rows.some((r) => r.id === selectedId) ? selectedId : (rows[0]?.id ?? null);
+  const focusRow = (id: string | null) => {
+    if (id === null) return;
+    setSelectedId(id);
+    rowEls.current.get(id)?.focus();
+  };
+  useImperativeHandle(ref, () => ({ focusSelected: () => focusRow(selected) }));
+
+  const onKeyDown = (e: KeyboardEvent<HTMLTableRowElement>, index: number) => {
+    if (!onRowOpen || e.target !== e.currentTarget) return;
+    const last = rows.length - 1;
+    let next: number | null = null;
+    const step = STEP[e.key];
+    if (step !== undefined) {
+      if (step < 0 && index === 0 && onLeaveTop) {
+        e.preventDefault();
+        onLeaveTop();
+        return;
+      }
+      next = Math.min(last, Math.max(0, index + step));
+    } else if (e.key === 'Home') next = 0;
+    else if (e.key === 'End') next = last;
+    else if (e.key === 'Enter' || e.key === ' ') {
+      e.preventDefault();
+      onRowOpen(rows[index]!.original);
+      return;
+    }
+    if (next === null) return;
+    e.preventDefault();
+    focusRow(rows[next]?.id ?? null);
+  };
+
+  if (rows.length === 0) return <p className="py-3 text-[15px] text-ink-soft">{empty}</p>;
+
+  const grid = onRowOpen !== undefined;
+  return (
+    // The region scrolls on a narrow screen; it takes the focus so a keyboard can scroll it too.
+    // It is positioned so that visually hidden (absolute) labels inside stay inside its scroll.
+    <div role="region" aria-label={label} tabIndex={0} className="relative max-w-full overflow-x-auto">
+      <table
+        aria-label={label}
+        {...(grid ? { role: 'grid', 'aria-rowcount': rows.length + 1 } : {})}
+        className="w-full border-collapse text-left text-[15px]"
+      >
+        <thead className="border-b border-ink/15 text-xs uppercase tracking-wide text-ink-soft">
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id}>
+              {group.headers.map((h) => (
+                <HeaderCell key={h.id} header={h} />
+              ))}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {rows.map((row, index) => {
+            const isSelected = grid && row.id === selected;
+            const isOpen = row.id === openRowId;
+            return (
+              <tr
+                key={row.id}
+                ref={(el) => {
+                  if (el) rowEls.current.set(row.id, el);
+                  else rowEls.current.delete(row.id);
+                }}
+                {...(grid
+                  ? {
+                      tabIndex: isSelected ? 0 : -1,
+                      'aria-selected': isSelected,
+                      onKeyDown: (e: KeyboardEvent<HTMLTableRowElement>) => onKeyDown(e, index),
+                      onClick: () => {
+                        setSelectedId(row.id);
+                        onRowOpen(row.original);
+                      },
+                    }
+                  : {})}
+                aria-current={isOpen || undefined}
+                className={`border-b border-ink/5 align-top ${
+                  grid ? `cursor-pointer outline-offset-[-3px] ${isSelected ? 'bg-accent-soft' : 'hover:bg-paper-sunk'}` : ''
+                } ${isOpen ? 'shadow-[inset_4px_0_0_0_#0f6b6b]' : ''} ${rowClassName?.(row.original) ?? ''}`}
+              >
+                {row.getVisibleCells().map((cell) => {
+                  const meta = cell.column.columnDef.meta;
+                  return (
+                    <td
+                      key={cell.id}
+                      {...(grid ? { role: 'gridcell' } : {})}
+                      className={`px-2 py-1.5 ${meta?.align === 'right' ? 'text-right tabular-nums' : ''} ${meta?.cellClassName ?? ''}`}
+                    >
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </td>
+                  );
+                })}
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}
