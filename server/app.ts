@@ -6,6 +6,7 @@ import helmet from 'helmet';
 import type { PassportStatic } from 'passport';
 import type { AppDeps } from './deps';
 import { apiKeyAuth, forPeople } from './middleware/api-key';
+import { clientFiles } from './middleware/client-files';
 import { csrfErrorToAppError, csrfProtection } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { configurePassport } from './middleware/passport';
@@ -85,15 +86,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(api);
   app.use('/api', notFoundHandler);
 
-  if (deps.env.STATIC_DIR) {
-    const dir = path.resolve(deps.env.STATIC_DIR);
-    app.use(express.static(dir, { index: false, maxAge: '1h' }));
-    // The client's routes are the browser's: every other GET gets the app shell.
-    app.get('/{*page}', (_req, res) => {
-      // dotfiles: the test build lives under .data/, and this path is ours, not the client's.
-      res.sendFile(path.join(dir, 'index.html'), { dotfiles: 'allow' });
-    });
-  }
+  if (deps.env.STATIC_DIR) app.use(clientFiles(path.resolve(deps.env.STATIC_DIR)));
   app.use(errorHandler);
   return app;
 }

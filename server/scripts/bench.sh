@@ -12,3 +12,4 @@ fi
 export DATABASE_URL="$BENCH_DATABASE_URL"
 export TSX_TSCONFIG_PATH="$ROOT/tsconfig.json"
 npx tsx tests/bench/run.ts
+npx tsx tests/bench/bundle-size.ts
