@@ -13,7 +13,8 @@ export default {
         mono: ['ui-monospace', 'SFMono-Regular', 'Menlo', 'monospace'],
       },
       colors: {
-        ink: { DEFAULT: '#1d2733', soft: '#4a5868', faint: '#7a8796' },
+        // faint is the lightest text still at WCAG AA 4.5:1 on paper and paper-sunk (axe color-contrast).
+        ink: { DEFAULT: '#1d2733', soft: '#4a5868', faint: '#5e6b7b' },
         paper: { DEFAULT: '#f6f7f5', raised: '#ffffff', sunk: '#eceeea' },
         accent: { DEFAULT: '#0f6b6b', strong: '#0a5050', soft: '#d7ecea' },
         go: { DEFAULT: '#1f7a3d', soft: '#e0f1e5' },
