@@ -61,8 +61,9 @@ class Session {
     const cookie = [...this.jar].map(([k, v]) => `${k}=${v}`).join('; ');
     return { cookie, 'x-csrf-token': this.token, ...(json ? { 'content-type': 'application/json' } : {}) };
   }
-  async fetch(path: string, init: RequestInit = {}): Promise<Response> {
-    const res = await fetch(`${this.base}${path}`, {
+  /** `base`: another server of the same database, where the same session is valid. */
+  async fetch(path: string, init: RequestInit = {}, base = this.base): Promise<Response> {
+    const res = await fetch(`${base}${path}`, {
       ...init,
       headers: { ...this.headers(!(init.body instanceof FormData)), ...init.headers },
     });
@@ -156,20 +157,23 @@ function request(mix: Mix, n: number): { path: string; init?: RequestInit } {
   }
 }
 
+const KINDS = ['number search', 'word search', 'coil compare', 'part detail'] as const;
+
 interface RunFigures {
   summary: LatencySummary;
+  /** p95 by kind of request (the order of KINDS). */
+  kindP95: number[];
   errors: number;
   firstError?: string;
   importMs: number;
 }
 
 async function runMix(bases: string[], mix: Mix, file: string): Promise<RunFigures> {
-  // Each client signs in on every server (a session is valid on all, but each keeps its own cookie jar per server here for simplicity).
-  const clients = await Promise.all(
-    Array.from({ length: CLIENTS }, () => Promise.all(bases.map((b) => new Session(b).signIn('clerk@harborlane.test')))),
-  );
+  // One clerk's session (sessions live in PostgreSQL: valid on every server) for all the clients.
+  const clerk = await new Session(bases[0]!).signIn('clerk@harborlane.test');
   const buyer = await new Session(bases[0]!).signIn('buyer@harborlane.test');
   const latencies: number[] = [];
+  const byKind: number[][] = KINDS.map(() => []);
   let errors = 0;
   let firstError: string | undefined;
   let n = 0;
@@ -177,13 +181,14 @@ async function runMix(bases: string[], mix: Mix, file: string): Promise<RunFigur
   const deadline = Date.now() + SECONDS * 1000;
   const importing = importPriceList(buyer, file);
   await Promise.all(
-    clients.map(async (sessions) => {
+    Array.from({ length: CLIENTS }, async () => {
       while (Date.now() < deadline) {
-        const s = sessions[turn++ % sessions.length]!; // round robin over the servers
-        const { path, init } = request(mix, n++);
+        const base = bases[turn++ % bases.length]; // round robin over the servers
+        const i = n++;
+        const { path, init } = request(mix, i);
         const t0 = performance.now();
         try {
-          const res = await s.fetch(path, init);
+          const res = await clerk.fetch(path, init, base);
           await res.arrayBuffer();
           if (!res.ok) {
             errors++;
@@ -194,6 +199,7 @@ async function runMix(bases: string[], mix: Mix, file: string): Promise<RunFigur
           firstError ??= `${path}: ${String(err)}`;
         }
         latencies.push(performance.now() - t0);
+        byKind[i % KINDS.length]!.push(performance.now() - t0);
       }
     }),
   );
@@ -202,7 +208,7 @@ async function runMix(bases: string[], mix: Mix, file: string): Promise<RunFigur
     firstError ??= `import: ${String(err)}`;
     return NaN;
   });
-  return { summary: summarise(latencies, SECONDS), errors, firstError, importMs };
+  return { summary: summarise(latencies, SECONDS), kindP95: byKind.map((l) => summarise(l, SECONDS).p95), errors, firstError, importMs };
 }
 
 async function documentsIn(standin: string): Promise<number> {
@@ -273,6 +279,11 @@ export async function runMixedLoadBench(databaseUrl: string): Promise<void> {
     );
     console.log(row('one app server', one));
     console.log(row('two app servers, round-robin', two));
+    for (const [name, f] of [
+      ['one', one],
+      ['two', two],
+    ] as const)
+      console.log(`  p95 by request, ${name}: ${KINDS.map((k, i) => `${k} ${fmt(f.kindP95[i]!)}`).join(', ')}`);
     for (const f of [one, two]) if (f.firstError) console.log(`  first error: ${f.firstError}`);
   } finally {
     for (const p of procs.reverse()) p.stop();
