@@ -5,7 +5,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pg from 'pg';
 import { scaleForeignNumber, scalePartNumber } from '../../seed/scale';
-import { writeSupplierFile } from './price-list-import';
+import { createDataSource } from '../../server/db/data-source';
+import { removeBenchData, writeSupplierFile } from './price-list-import';
 import { fmt, summarise, type LatencySummary } from './stats';
 
 /**
@@ -88,7 +89,13 @@ async function okJson<T>(res: Response, what: string): Promise<T> {
 }
 
 /** Upload → map (the guessed mapping sent back) → preview → commit of a new supplier's file. */
-async function importPriceList(buyer: Session, file: string): Promise<number> {
+interface Imported {
+  ms: number;
+  supplierId: string;
+  listId: string;
+}
+
+async function importPriceList(buyer: Session, file: string): Promise<Imported> {
   const t0 = performance.now();
   const supplier = await okJson<{ supplier: { id: string } }>(
     await buyer.fetch('/api/suppliers', { method: 'POST', body: JSON.stringify({ name: `Load supplier ${randomUUID().slice(0, 8)}` }) }),
@@ -106,7 +113,7 @@ async function importPriceList(buyer: Session, file: string): Promise<number> {
     'preview',
   );
   await okJson(await buyer.fetch(`/api/price-lists/${list.id}/commit`, { method: 'POST', body: '{}' }), 'commit');
-  return performance.now() - t0;
+  return { ms: performance.now() - t0, supplierId: supplier.supplier.id, listId: list.id };
 }
 
 interface Mix {
@@ -166,6 +173,7 @@ interface RunFigures {
   errors: number;
   firstError?: string;
   importMs: number;
+  imported?: Imported;
 }
 
 async function runMix(bases: string[], mix: Mix, file: string): Promise<RunFigures> {
@@ -203,12 +211,19 @@ async function runMix(bases: string[], mix: Mix, file: string): Promise<RunFigur
       }
     }),
   );
-  const importMs = await importing.catch((err: unknown) => {
+  const imported = await importing.catch((err: unknown) => {
     errors++;
     firstError ??= `import: ${String(err)}`;
-    return NaN;
+    return undefined;
   });
-  return { summary: summarise(latencies, SECONDS), kindP95: byKind.map((l) => summarise(l, SECONDS).p95), errors, firstError, importMs };
+  return {
+    summary: summarise(latencies, SECONDS),
+    kindP95: byKind.map((l) => summarise(l, SECONDS).p95),
+    errors,
+    firstError,
+    importMs: imported?.ms ?? NaN,
+    imported,
+  };
 }
 
 async function documentsIn(standin: string): Promise<number> {
@@ -226,6 +241,7 @@ async function waitForIndex(standin: string, parts: number): Promise<void> {
 
 export async function runMixedLoadBench(databaseUrl: string): Promise<void> {
   const procs: Proc[] = [];
+  const runs: RunFigures[] = [];
   const dir = await mkdtemp(join(tmpdir(), 'arcwise-mixed-load-'));
   try {
     const standinRun = await startProcess(
@@ -268,8 +284,10 @@ export async function runMixedLoadBench(databaseUrl: string): Promise<void> {
     for (const [i, f] of files.entries()) await writeSupplierFile(f, `ML${randomUUID().slice(0, 6).toUpperCase()}${i}`, IMPORT_ROWS);
 
     const one = await runMix([first], mix, files[0]!);
+    runs.push(one);
     const second = await startApp(false);
     const two = await runMix([first, second], mix, files[1]!);
+    runs.push(two);
 
     const row = (name: string, f: RunFigures) =>
       `  ${name.padEnd(30)} ${f.summary.perSecond.toFixed(0).padStart(6)} req/s  p50 ${fmt(f.summary.p50).padStart(10)}  p95 ${fmt(f.summary.p95).padStart(10)}  p99 ${fmt(f.summary.p99).padStart(10)}  errors ${f.errors}  import ${(f.importMs / 1000).toFixed(1)} s`;
@@ -287,6 +305,10 @@ export async function runMixedLoadBench(databaseUrl: string): Promise<void> {
     for (const f of [one, two]) if (f.firstError) console.log(`  first error: ${f.firstError}`);
   } finally {
     for (const p of procs.reverse()) p.stop();
+    // The imports' new parts, lists and suppliers go, so the next run measures the same data.
+    const ds = await createDataSource(databaseUrl).initialize();
+    for (const { imported } of runs) if (imported) await removeBenchData(ds, imported.supplierId, [imported.listId]);
+    await ds.destroy();
     await rm(dir, { recursive: true, force: true });
   }
 }

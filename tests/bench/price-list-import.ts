@@ -95,7 +95,7 @@ async function withPeakRss<T>(work: () => Promise<T>): Promise<{ result: T; peak
   }
 }
 
-async function removeBenchData(ds: DataSource, supplierId: string, listIds: string[]): Promise<void> {
+export async function removeBenchData(ds: DataSource, supplierId: string, listIds: string[]): Promise<void> {
   for (const listId of listIds) {
     await ds.query(
       `DELETE FROM part p USING price_list_row r
