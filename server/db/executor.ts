@@ -57,6 +57,30 @@ export async function queryRows<S extends z.ZodType>(
   return parseRows(schema, sql, (await run(ex, sql, params)).rows);
 }
 
+/**
+ * queryRows as a named prepared statement: each connection plans it once and, after a few runs,
+ * reuses a generic plan. For a hot query whose planning costs more than its run (a recursive CTE
+ * over indexed lookups); the name must be unique to this SQL text.
+ */
+export async function queryRowsPrepared<S extends z.ZodType>(
+  ex: Executor,
+  schema: S,
+  name: string,
+  sql: string,
+  params: readonly unknown[] = [],
+): Promise<z.output<S>[]> {
+  const config = { name, text: sql, values: [...params] };
+  if (!(ex instanceof EntityManager)) return parseRows(schema, sql, (await ex.query(config)).rows);
+  const runner = ex.queryRunner ?? ex.connection.createQueryRunner();
+  try {
+    // The runner's own pg connection (the replica's under readOnly), asked directly: TypeORM cannot name a statement.
+    const client = (await runner.connect()) as pg.ClientBase;
+    return parseRows(schema, sql, (await client.query(config)).rows);
+  } finally {
+    if (!ex.queryRunner) await runner.release();
+  }
+}
+
 /** The first row, parsed, or null when there is none. */
 export async function queryOne<S extends z.ZodType>(
   ex: Executor,

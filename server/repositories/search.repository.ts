@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { MATCHED_BY } from '../../shared/schemas/search';
-import { queryIds, queryRows, type Executor } from '../db/executor';
+import { queryIds, queryRows, queryRowsPrepared, type Executor } from '../db/executor';
 import { partKindSchema } from './parts.repository';
 
 /** The SQL behind the Counter's search: the index's documents, and the exact lookup of a number. */
@@ -118,17 +118,22 @@ const exactRowSchema = z.object({
   description: z.string(),
   on_hand: z.number().int(),
   has_spec: z.boolean(),
+  /** For an interchange match, the foreign part the claim names where the catalog holds it (its verdict's original). */
+  original_part_id: z.string().nullable(),
 });
 export type ExactNumberRow = z.infer<typeof exactRowSchema>;
 
 /**
  * Our current parts a folded number names exactly — our number, a GTIN or an interchange number,
- * each followed along the supersession chain to the part that is current.
+ * each followed along the supersession chain to the part that is current. An interchange match
+ * carries the claim's foreign part in the same query, so the number path makes one round trip.
  */
 export function exactNumberRows(ex: Executor, norm: string, limit: number): Promise<ExactNumberRow[]> {
-  return queryRows(
+  // Prepared: planning this CTE costs more than running it, and it runs on every number typed.
+  return queryRowsPrepared(
     ex,
     exactRowSchema,
+    'search.exact-number',
     `WITH RECURSIVE direct AS (
         SELECT p.id, 'number'::text AS by, p.part_number_norm AS num, 0 AS pri FROM part p WHERE p.part_number_norm = $1
         UNION ALL SELECT p.id, 'gtin', p.gtin, 0 FROM part p WHERE p.gtin = $1
@@ -142,7 +147,11 @@ export function exactNumberRows(ex: Executor, norm: string, limit: number): Prom
       )
       SELECT c.id AS part_id, c.by AS matched_by, c.num AS matched_number, b.name AS brand, p.part_number, p.kind, p.description,
              coalesce(s.on_hand, 0) AS on_hand,
-             (EXISTS (SELECT 1 FROM coil_spec x WHERE x.part_id = p.id) OR EXISTS (SELECT 1 FROM plug_spec y WHERE y.part_id = p.id)) AS has_spec
+             (EXISTS (SELECT 1 FROM coil_spec x WHERE x.part_id = p.id) OR EXISTS (SELECT 1 FROM plug_spec y WHERE y.part_id = p.id)) AS has_spec,
+             CASE WHEN c.by = 'interchange' THEN (
+               SELECT fp.id FROM interchange i JOIN brand fb ON lower(fb.name) = lower(i.foreign_brand)
+                 JOIN part fp ON fp.brand_id = fb.id AND fp.part_number_norm = i.foreign_number_norm
+                WHERE i.part_id = c.id AND i.foreign_number_norm = c.num LIMIT 1) END AS original_part_id
         FROM current c JOIN part p ON p.id = c.id JOIN brand b ON b.id = p.brand_id AND b.ours
         LEFT JOIN stock s ON s.part_id = p.id
        ORDER BY c.pri, p.part_number LIMIT $2`,

@@ -3,32 +3,50 @@ import type { CompatSettings } from '../../shared/compat';
 import { looksLikePartNumber, normalizePartNumber } from '../../shared/part-number';
 import { FACET_FIELDS, type SearchHit, type SearchQuery, type SearchResponse } from '../../shared/schemas/search';
 import { PART_KINDS, type PartKind } from '../../shared/schemas/specs';
+import type { Executor } from '../db/executor';
 import { readOnly } from '../db/read-only';
 import { presentInterchangeCheck } from '../presenters/part.presenter';
 import { presentSearchHit } from '../presenters/search.presenter';
 import { claimOriginals } from '../repositories/interchange.repository';
-import { exactNumberHits } from '../search/exact-number';
+import { claimKey, exactNumberHits, type ClaimOriginals } from '../search/exact-number';
 import { buildFilters } from '../search/filters';
 import { FACET_ATTRIBUTES } from '../search/part-document';
 import type { PartSearchIndex } from '../search/search-index';
 import { interchangeVerdict } from './compat/interchange-verdict.service';
 import { getSettings } from './settings.service';
 
-/** Interchange hits carry the verdict of the claim, so a wrong row shows as no-go at the counter. */
-async function withInterchangeChecks(ds: DataSource, hits: SearchHit[], settings: CompatSettings, engineId?: string): Promise<SearchHit[]> {
+/** The foreign parts of the index hits' interchange claims: one query for them all. */
+async function claimedOriginals(ex: Executor, claims: SearchHit[]): Promise<ClaimOriginals> {
+  const rows = await claimOriginals(
+    ex,
+    claims.map((h) => h.partId),
+    claims.map((h) => h.matchedNumber ?? ''),
+  );
+  return new Map(rows.map((r) => [claimKey(r.part_id, r.foreign_number_norm), r.original_part_id]));
+}
+
+/**
+ * Interchange hits carry the verdict of the claim, so a wrong row shows as no-go at the counter.
+ * `known`: the claims' foreign parts when the caller already has them (the exact-number lookup).
+ * A claim whose foreign part the catalog does not hold has no verdict, so without any there is no
+ * more work.
+ */
+async function withInterchangeChecks(
+  ds: DataSource,
+  hits: SearchHit[],
+  settings: CompatSettings,
+  engineId: string | undefined,
+  known?: ClaimOriginals,
+): Promise<SearchHit[]> {
   const claims = hits.filter((h) => h.matchedBy === 'interchange' && h.matchedNumber);
-  if (!claims.length) return hits;
+  if (!claims.length || known?.size === 0) return hits;
   return readOnly(ds, async (ex) => {
-    // One query for every claim's foreign part (where the catalog holds its spec).
-    const rows = await claimOriginals(
-      ex,
-      claims.map((h) => h.partId),
-      claims.map((h) => h.matchedNumber ?? ''),
-    );
-    const originals = new Map(rows.map((r) => [`${r.part_id}|${r.foreign_number_norm}`, r.original_part_id]));
+    const originals = known ?? (await claimedOriginals(ex, claims));
+    if (!originals.size) return hits;
     return Promise.all(
       hits.map(async (h) => {
-        const originalPartId = h.matchedBy === 'interchange' ? originals.get(`${h.partId}|${h.matchedNumber}`) : undefined;
+        const originalPartId =
+          h.matchedBy === 'interchange' && h.matchedNumber ? originals.get(claimKey(h.partId, h.matchedNumber)) : undefined;
         if (!originalPartId || !h.matchedNumber) return h;
         const check = await interchangeVerdict(
           ex,
@@ -70,7 +88,12 @@ export async function searchParts(index: PartSearchIndex, query: SearchQuery, ds
   const filtered = query.kind !== undefined || FACET_FIELDS.some((f) => query[f] !== undefined);
   if (numberLike && !filtered && query.offset === 0) {
     const exact = await readOnly(ds, (ex) => exactNumberHits(ex, normalizePartNumber(raw), query.limit));
-    if (exact.length) return { hits: await withInterchangeChecks(ds, exact, compat, query.engineId), total: exact.length, facets: {} };
+    if (exact.hits.length)
+      return {
+        hits: await withInterchangeChecks(ds, exact.hits, compat, query.engineId, exact.originals),
+        total: exact.hits.length,
+        facets: {},
+      };
   }
   const said = numberLike ? { words: raw, kind: query.kind } : kindFromWords(raw, query.kind);
   // Facet counts cost a pass over every match: only when the filter controls ask for them.

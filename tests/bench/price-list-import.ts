@@ -23,7 +23,7 @@ import { uploadPriceList } from '../../server/services/price-list/intake.service
 
 const HEADER = 'Part Number,Brand,Description,Cost,List,Core,Pack Qty,GTIN,Supersedes,Kind';
 
-async function writeSupplierFile(path: string, tag: string, rows: number, priceShiftCents = 0): Promise<void> {
+export async function writeSupplierFile(path: string, tag: string, rows: number, priceShiftCents = 0): Promise<void> {
   const out = createWriteStream(path);
   let chunk = `${HEADER}\n`;
   for (let i = 0; i < rows; i++) {
@@ -95,7 +95,7 @@ async function withPeakRss<T>(work: () => Promise<T>): Promise<{ result: T; peak
   }
 }
 
-async function removeBenchData(ds: DataSource, supplierId: string, listIds: string[]): Promise<void> {
+export async function removeBenchData(ds: DataSource, supplierId: string, listIds: string[]): Promise<void> {
   for (const listId of listIds) {
     await ds.query(
       `DELETE FROM part p USING price_list_row r

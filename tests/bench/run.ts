@@ -1,4 +1,5 @@
 import { runCompatRankBench } from './compat-rank';
+import { runMixedLoadBench } from './mixed-load';
 import { prepareBenchDatabase } from './prepare';
 import { runPriceListImportBench } from './price-list-import';
 import { runParseBench } from './price-list-parse';
@@ -29,6 +30,10 @@ async function main(): Promise<void> {
   if (wanted('search')) {
     console.log('\n== search');
     await runSearchBench();
+  }
+  if (wanted('mixed')) {
+    console.log('\n== mixed load on shared services (issue 11)');
+    await runMixedLoadBench(url);
   }
 }
 

@@ -68,11 +68,16 @@ async function startServer(): Promise<{ base: string; indexed: number; indexMs: 
   });
   const line = await new Promise<string>((resolve, reject) => {
     let buf = '';
-    child.stdout.on('data', (d: Buffer) => {
+    const onData = (d: Buffer) => {
       buf += d.toString();
       const m = /READY [^\n]*\n/.exec(buf);
-      if (m) resolve(m[0]);
-    });
+      if (!m) return;
+      // Then its request log is drained unread: kept, it would cost the load generator's CPU.
+      child.stdout.off('data', onData);
+      child.stdout.resume();
+      resolve(m[0]);
+    };
+    child.stdout.on('data', onData);
     child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
   });
   const [, port, indexed, ms] = line.trim().split(' ');
