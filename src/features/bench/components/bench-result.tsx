@@ -1,4 +1,4 @@
-import { StatusBadge, type Verdict } from '@/components/compat/verdict-badge';
+import { StatusBadge, type Verdict } from '@/features/compat/components/verdict-badge';
 import { formatMeasure, formatRange } from '@shared/format';
 import type { BenchVerdict } from '@shared/compat/bench-test';
 import type { BenchResult } from '@shared/schemas/bench';

@@ -3,7 +3,7 @@ import { DEFAULT_COMPAT_SETTINGS } from '@shared/compat/settings';
 import { fractionToPct } from '@shared/units';
 import { benchBodySchema, type BenchBody } from '@shared/schemas/bench';
 import { coilSpecSchema, type CoilSpec } from '@shared/schemas/specs';
-import { Cautions } from '@/components/compat/cautions';
+import { Cautions } from '@/features/compat/components/cautions';
 import { fieldErrorsOf, issuesByPath } from '@/components/ui/field-errors';
 import { formatMeasure, formatRange } from '@shared/format';
 import { Button } from '@/components/ui/button';

@@ -1,5 +1,5 @@
 import type { CompatResult } from '@shared/schemas/compat';
-import { CompatResultView } from '@/components/compat/compat-result-view';
+import { CompatResultView } from '@/features/compat/components/compat-result-view';
 import { ErrorNote } from '@/components/ui/panel';
 
 /**
