@@ -238,6 +238,23 @@ describe('journey 4: compare, save a fit report, e-mail and share it', () => {
     expect(await tech.page.getByText('typed-in coil spec').count()).toBeGreaterThan(0);
     await tech.shot('compare-typed-spec');
 
+    // An edit that is not a figure: the verdict and its charts go, the field says why, nothing is sent.
+    let compares = 0;
+    tech.page.on('request', (r) => {
+      if (new URL(r.url()).pathname.startsWith('/api/compat/')) compares += 1;
+    });
+    await form.getByLabel('Primary inductance (mH)').fill('abc');
+    await overall.waitFor({ state: 'detached' });
+    await tech.page.getByTestId('compare-out-of-date').waitFor();
+    expect(await tech.page.getByRole('figure', { name: /secondary voltage/ }).count()).toBe(0);
+    await form.getByRole('button', { name: 'Use this spec' }).click();
+    await form.getByText('Primary inductance must be a number').waitFor();
+    expect(await tech.page.getByTestId('overall-verdict').count()).toBe(0);
+    expect(compares).toBe(0);
+    // Put back as used: the verdict is current again.
+    await form.getByLabel('Primary inductance (mH)').fill('3.3');
+    await overall.waitFor();
+
     const readings = await benchWithCoil(tech, 'QW-IC 3101');
     // 0.72 Ω on a winding at 60 °C is 0.622 Ω at 20 °C (α = 0.00393 /K): inside 0.5–0.7 Ω.
     await readings.getByLabel('Primary resistance (Ω)').fill('0.72');
