@@ -1,6 +1,9 @@
+import { createColumnHelper } from '@tanstack/react-table';
+import { useMemo } from 'react';
 import type { CheckRow } from '@shared/schemas/compat';
-import { checkLabel } from './check-labels';
 import { formatFigure } from '@shared/format';
+import { DataTable } from '@/components/ui/data-table';
+import { checkLabel } from './check-labels';
 import { VerdictBadge } from './verdict-badge';
 
 const ROW_TINT = {
@@ -8,6 +11,17 @@ const ROW_TINT = {
   review: 'bg-review-soft/35',
   'no-go': 'bg-nogo-soft/45',
 } as const;
+
+const col = createColumnHelper<CheckRow>();
+
+function SideHeader({ side, label }: { side: string; label: string }) {
+  return (
+    <>
+      <span className="block">{side}</span>
+      <span className="block font-normal normal-case tracking-normal text-ink-faint">{label}</span>
+    </>
+  );
+}
 
 /**
  * The check table: one row per check with its verdict (word and icon), the figures on both sides
@@ -22,49 +36,36 @@ export function CheckTable({
   originalLabel?: string;
   substituteLabel?: string;
 }) {
+  const columns = useMemo(
+    () => [
+      col.accessor((c) => checkLabel(c.id), {
+        id: 'check',
+        header: 'Check',
+        meta: { cellClassName: 'font-semibold whitespace-nowrap text-ink' },
+      }),
+      col.display({ id: 'verdict', header: 'Verdict', cell: ({ row }) => <VerdictBadge verdict={row.original.verdict} /> }),
+      col.accessor((c) => formatFigure(c.original, c.unit), {
+        id: 'original',
+        header: () => <SideHeader side="Original" label={originalLabel} />,
+        meta: { cellClassName: 'tabular-nums whitespace-nowrap' },
+      }),
+      col.accessor((c) => formatFigure(c.substitute, c.unit), {
+        id: 'substitute',
+        header: () => <SideHeader side="Substitute" label={substituteLabel} />,
+        meta: { cellClassName: 'font-medium tabular-nums whitespace-nowrap' },
+      }),
+      col.accessor('reason', { header: 'Reason', meta: { cellClassName: 'min-w-[18rem] leading-snug text-ink-soft' } }),
+    ],
+    [originalLabel, substituteLabel],
+  );
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full border-collapse text-left text-[15px]">
-        <caption className="sr-only">
-          Checks of {substituteLabel} against {originalLabel}
-        </caption>
-        <thead>
-          <tr className="border-b-2 border-ink/15 text-xs font-semibold uppercase tracking-wide text-ink-soft">
-            <th scope="col" className="py-2 pr-3">
-              Check
-            </th>
-            <th scope="col" className="py-2 pr-3">
-              Verdict
-            </th>
-            <th scope="col" className="py-2 pr-3">
-              <span className="block">Original</span>
-              <span className="block font-normal normal-case tracking-normal text-ink-faint">{originalLabel}</span>
-            </th>
-            <th scope="col" className="py-2 pr-3">
-              <span className="block">Substitute</span>
-              <span className="block font-normal normal-case tracking-normal text-ink-faint">{substituteLabel}</span>
-            </th>
-            <th scope="col" className="py-2">
-              Reason
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {checks.map((c) => (
-            <tr key={c.id} data-check={c.id} className={`border-b border-ink/10 align-top print:bg-transparent ${ROW_TINT[c.verdict]}`}>
-              <th scope="row" className="py-2 pr-3 font-semibold whitespace-nowrap text-ink">
-                {checkLabel(c.id)}
-              </th>
-              <td className="py-2 pr-3">
-                <VerdictBadge verdict={c.verdict} />
-              </td>
-              <td className="py-2 pr-3 tabular-nums whitespace-nowrap">{formatFigure(c.original, c.unit)}</td>
-              <td className="py-2 pr-3 font-medium tabular-nums whitespace-nowrap">{formatFigure(c.substitute, c.unit)}</td>
-              <td className="min-w-[18rem] py-2 leading-snug text-ink-soft">{c.reason}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable
+      label={`Checks of ${substituteLabel} against ${originalLabel}`}
+      data={[...checks]}
+      columns={columns}
+      getRowId={(c) => c.id}
+      rowData={(c) => ({ 'data-check': c.id })}
+      rowClassName={(c) => `print:bg-transparent ${ROW_TINT[c.verdict]}`}
+    />
   );
 }
