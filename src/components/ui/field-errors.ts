@@ -40,9 +40,9 @@ export function inFormWords(message: string, labelOf: (key: string) => string | 
 
 /**
  * A field's message as it reads under the field, in the same words the API uses
- * (shared/validation): a `plainWords` phrase reads on from the field's label ("Reach must be at
- * most 40"); a sentence a schema wrote keeps its words, with the field names in it turned into
- * labels ("“Primary resistance, min” must not exceed “Primary resistance, max”").
+ * (shared/validation): a `plainWords` phrase reads on from the field's label, a limit in the field's unit
+ * ("Reach must be at most 40 mm"); a sentence a schema wrote keeps its words, with the field names
+ * in it turned into labels ("“Energy at cranking, review from” must not exceed “Energy at cranking, go from”").
  */
 export function labelledMessage(
   label: string,
