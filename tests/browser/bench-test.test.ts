@@ -65,6 +65,11 @@ describe('bench test', () => {
     expect((await verdict.textContent())?.trim()).toBe('open');
     expect(await result.textContent()).toContain('open circuit');
     expect(checks).toBe(2);
+
+    // On a phone (390 × 844) the page with its result is no wider than the screen.
+    await tech.page.setViewportSize({ width: 390, height: 844 });
+    await tech.shot('bench-phone');
+    expect(await tech.page.evaluate(() => document.documentElement.scrollWidth)).toBe(390);
   });
 
   it('a typed-in window whose ends are the wrong way round is refused in words', async () => {

@@ -254,6 +254,9 @@ describe('journey 4: compare, save a fit report, e-mail and share it', () => {
     // Put back as used: the verdict is current again.
     await form.getByLabel('Primary inductance (mH)').fill('3.3');
     await overall.waitFor();
+    await tech.page.setViewportSize({ width: 390, height: 844 });
+    await tech.shot('compare-typed-spec-phone');
+    await tech.page.setViewportSize({ width: 1440, height: 900 });
 
     const readings = await benchWithCoil(tech, 'QW-IC 3101');
     // 0.72 Ω on a winding at 60 °C is 0.622 Ω at 20 °C (α = 0.00393 /K): inside 0.5–0.7 Ω.

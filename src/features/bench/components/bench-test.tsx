@@ -166,7 +166,7 @@ function BenchLayout<TIn extends FieldValues, TOut extends BenchBody>({
       serverError={run.error}
       className="flex flex-col gap-4"
     >
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-2">
         <Panel
           title="Coil"
           actions={
@@ -200,7 +200,7 @@ function BenchLayout<TIn extends FieldValues, TOut extends BenchBody>({
         </Panel>
       </div>
 
-      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,26rem)]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,26rem)]">
         <Panel title="Result">
           {result ? (
             <BenchResultView result={result.data} readings={result.readings} />
