@@ -256,6 +256,8 @@ describe('journey 4: compare, save a fit report, e-mail and share it', () => {
     await overall.waitFor();
     await tech.page.setViewportSize({ width: 390, height: 844 });
     await tech.shot('compare-typed-spec-phone');
+    // On a phone the verdict, tables and charts fit the screen; tables scroll inside their regions.
+    expect(await tech.page.evaluate(() => document.documentElement.scrollWidth)).toBe(390);
     await tech.page.setViewportSize({ width: 1440, height: 900 });
 
     const readings = await benchWithCoil(tech, 'QW-IC 3101');

@@ -44,7 +44,7 @@ export function ComparePage() {
       </PageHeader>
       <div className="flex flex-col gap-4">
         <EnginePicker engineId={sel.engineId} error={errors.engine.engineId ?? errors.engine['']} onPick={sel.setEngine} />
-        <div className="grid items-start gap-4 lg:grid-cols-2">
+        <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-4 lg:grid-cols-2">
           <SidePicker
             key={`original-${sel.kind}`}
             title="Original"
