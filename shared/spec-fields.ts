@@ -138,6 +138,12 @@ export const specField = (name: string): SpecFieldDef | undefined => BY_NAME.get
 /** "reachMm" → "Reach"; a name not in the table is returned as given. */
 export const specLabel = (name: string): string => BY_NAME.get(name)?.label ?? name;
 
+/** "primaryOhmMin" → "Primary resistance": what a window's end measures; its label when it is not a window's end. */
+export const specQuantity = (name: string): string => {
+  const f = BY_NAME.get(name);
+  return f?.quantity ?? f?.label ?? name;
+};
+
 /** One spec value as text with its unit: "12.7 mm", "0.5 Ω", "85:1", "yes", "integrated igniter"; "none" for no value. */
 export function formatSpecValue(name: string, value: unknown): string {
   if (value === null || value === undefined || value === '') return 'none';

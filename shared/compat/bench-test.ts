@@ -1,11 +1,19 @@
 import type { CoilSpec } from '../schemas/specs';
 import { fractionToPct } from '../units';
 import { CompatInputError, requireFinite, requireFiniteDeep } from './errors';
-import { fixed, range } from './format';
+import { compact, fixed, range } from './format';
 import { DEFAULT_COMPAT_SETTINGS, type CompatSettings } from './settings';
 
 /** Copper's resistance is quoted at 20 °C; windings are corrected to it before judging. */
 export const COPPER_REFERENCE_C = 20;
+
+/**
+ * A resistance reading at or above this is no continuity: an open winding, not one out of its
+ * window. 40 MΩ is the top of the highest resistance range of a common 4000-count handheld
+ * multimeter, which shows "OL" (overload) above it (common practice, from memory); a winding's
+ * primary reads about an ohm and its secondary some kilohms, so nothing good comes near it.
+ */
+export const OPEN_CIRCUIT_OHM = 40e6;
 
 export const BENCH_VERDICTS = ['in-spec', 'out-of-spec', 'short', 'open'] as const;
 export type BenchVerdict = (typeof BENCH_VERDICTS)[number];
@@ -13,7 +21,7 @@ export type BenchVerdict = (typeof BENCH_VERDICTS)[number];
 export type BenchWindow = Pick<CoilSpec, 'primaryOhmMin' | 'primaryOhmMax' | 'secondaryKohmMin' | 'secondaryKohmMax'>;
 
 export interface BenchTestInput {
-  /** The meter's primary reading in Ω; null, NaN or Infinity for no reading / over range (open). */
+  /** The meter's primary reading in Ω; null, NaN, Infinity or OPEN_CIRCUIT_OHM and above for no reading / over range (open). */
   primaryOhm: number | null;
   /** The secondary reading in kΩ; leave undefined when not measured, null when the meter reads open. */
   secondaryKohm?: number | null;
@@ -44,6 +52,9 @@ export function copperResistanceAt20(resistance: number, temperatureC: number, a
 
 const isReading = (value: number | null | undefined): value is number => typeof value === 'number' && Number.isFinite(value);
 
+/** Whether a reading in ohms is a continuity reading rather than the meter's overload (open). */
+export const isContinuity = (ohm: number | null | undefined): ohm is number => isReading(ohm) && ohm < OPEN_CIRCUIT_OHM;
+
 /** One winding's reading, corrected and judged against its window. */
 interface Winding {
   name: 'primary' | 'secondary';
@@ -67,7 +78,11 @@ function windingClause(w: Winding, verdict: BenchVerdict, tempC: number, shortFr
     return `the ${w.name} gives no reading (open circuit) against its ${window} window`;
   }
   const places = w.decimals + 1;
-  const figures = `the ${w.name} reads ${fixed(w.at20, places)} ${w.unit} at ${COPPER_REFERENCE_C} °C (${fixed(w.reading, places)} ${w.unit} at ${fixed(tempC, 0)} °C)`;
+  // The correction is worth stating only when the winding was read away from 20 °C.
+  const figures =
+    tempC === COPPER_REFERENCE_C
+      ? `the ${w.name} reads ${fixed(w.reading, places)} ${w.unit} at ${COPPER_REFERENCE_C} °C`
+      : `the ${w.name} reads ${fixed(w.at20, places)} ${w.unit} at ${COPPER_REFERENCE_C} °C (${fixed(w.reading, places)} ${w.unit} at ${compact(tempC, 1)} °C)`;
   switch (verdict) {
     case 'short':
       return `${figures}, under ${fixed(fractionToPct(shortFraction), 0)} % of its ${window} window's low end, a shorted winding`;
@@ -104,7 +119,7 @@ export function benchTest(input: BenchTestInput): BenchTestResult {
   const shortFraction = settings.shortFractionOfLow;
   const correct = (reading: number | null): number | null => (reading === null ? null : copperResistanceAt20(reading, tempC, alpha));
 
-  const primaryReading = isReading(input.primaryOhm) ? input.primaryOhm : null;
+  const primaryReading = isContinuity(input.primaryOhm) ? input.primaryOhm : null;
   const primary: Winding = {
     name: 'primary',
     reading: primaryReading,
@@ -117,9 +132,9 @@ export function benchTest(input: BenchTestInput): BenchTestResult {
   const primaryVerdict = judgeWinding(primary, shortFraction);
   const clauses = [windingClause(primary, primaryVerdict, tempC, shortFraction)];
 
-  // undefined: not measured; null, NaN or Infinity: the meter read open
+  // undefined: not measured; null, NaN, Infinity or an overload: the meter read open
   const measuredSecondary = input.secondaryKohm !== undefined;
-  const secondaryReading = isReading(input.secondaryKohm) ? input.secondaryKohm : null;
+  const secondaryReading = isReading(input.secondaryKohm) && isContinuity(input.secondaryKohm * 1000) ? input.secondaryKohm : null;
   const secondaryAt20Kohm = measuredSecondary ? correct(secondaryReading) : null;
   let secondaryVerdict: BenchVerdict | null = null;
   if (measuredSecondary) {

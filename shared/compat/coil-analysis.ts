@@ -44,7 +44,7 @@ export function validateCoil(coil: CoilSpec, field: string): void {
   requirePositive(coil.primaryOhmMin, `${field}.primaryOhmMin`);
   requirePositive(coil.primaryOhmMax, `${field}.primaryOhmMax`);
   if (coil.primaryOhmMin > coil.primaryOhmMax) {
-    throw new CompatInputError(`${field}.primaryOhmMin`, 'must not exceed primaryOhmMax');
+    throw new CompatInputError(`${field}.primaryOhmMin`, "must not be above the window's max");
   }
   requirePositive(coil.primaryInductanceMh, `${field}.primaryInductanceMh`);
   requirePositive(coil.turnsRatio, `${field}.turnsRatio`);
@@ -61,7 +61,7 @@ export function validateCoil(coil: CoilSpec, field: string): void {
     requirePositive(coil.secondaryKohmMin, `${field}.secondaryKohmMin`);
     requirePositive(coil.secondaryKohmMax, `${field}.secondaryKohmMax`);
     if (coil.secondaryKohmMin > coil.secondaryKohmMax) {
-      throw new CompatInputError(`${field}.secondaryKohmMin`, 'must not exceed secondaryKohmMax');
+      throw new CompatInputError(`${field}.secondaryKohmMin`, "must not be above the window's max");
     }
   }
 }

@@ -6,17 +6,16 @@ import { coilSpecSchema } from './specs';
 
 /** Bench test: a coil's measured resistances against its windows, corrected to 20 °C. */
 
-const measuredSchema = z.object({
+export const benchMeasuredSchema = z.object({
   primaryOhm: z.number().min(0).nullable(),
   secondaryKohm: z.number().min(0).nullable().optional(),
   temperatureC: z.number().min(-40).max(150),
 });
 
 /** The coil by its part in the catalog, or by its spec typed in; and what the meter read. */
-export const benchBodySchema = z.union([
-  z.object({ partId: uuidSchema, measured: measuredSchema }),
-  z.object({ spec: coilSpecSchema, measured: measuredSchema }),
-]);
+export const benchByPartSchema = z.object({ partId: uuidSchema, measured: benchMeasuredSchema });
+export const benchBySpecSchema = z.object({ spec: coilSpecSchema, measured: benchMeasuredSchema });
+export const benchBodySchema = z.union([benchByPartSchema, benchBySpecSchema]);
 export type BenchBody = z.infer<typeof benchBodySchema>;
 
 export const benchVerdictSchema = z.enum(BENCH_VERDICTS);

@@ -40,7 +40,7 @@ export const coilSpecSchema = z
       ctx.addIssue({
         code: 'custom',
         path: ['primaryOhmMin'],
-        message: 'primaryOhmMin must not exceed primaryOhmMax',
+        message: "must not be above the window's max",
       });
     }
     const hasMin = s.secondaryKohmMin != null;
@@ -55,7 +55,7 @@ export const coilSpecSchema = z
       ctx.addIssue({
         code: 'custom',
         path: ['secondaryKohmMin'],
-        message: 'secondaryKohmMin must not exceed secondaryKohmMax',
+        message: "must not be above the window's max",
       });
     }
   })

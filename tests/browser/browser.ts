@@ -56,3 +56,16 @@ export async function signInAs(s: BrowserSession, email: string, password = 'arc
   await s.page.getByLabel('Password').fill(password);
   await s.page.getByRole('button', { name: 'Sign in' }).click();
 }
+
+/** From any signed-in page: the Bench test with a catalog coil chosen; its readings group. */
+export async function benchWithCoil(s: BrowserSession, partNumber: string) {
+  await s.page.getByRole('link', { name: 'Bench test' }).click();
+  await s.page.getByRole('heading', { name: 'Bench test' }).waitFor();
+  await s.page.getByLabel('Find the coil').fill(partNumber);
+  await s.page
+    .getByRole('button', { name: new RegExp(partNumber) })
+    .first()
+    .click();
+  await s.page.getByTestId('bench-coil').filter({ hasText: partNumber }).waitFor();
+  return s.page.getByRole('group', { name: 'Bench readings' });
+}

@@ -174,7 +174,7 @@ describe('the Catalog page', () => {
     await specForm.getByLabel('Turns ratio (:1)').fill('85');
     await specForm.getByLabel('Peak primary current (A)').fill('8');
     await specForm.getByRole('button', { name: 'Save spec' }).click();
-    await specForm.getByText('“Primary resistance, min” must not exceed “Primary resistance, max”').waitFor();
+    await specForm.getByText("Primary resistance, min must not be above the window's max").waitFor();
     await s.shot('catalog-spec-error');
     await specForm.getByLabel('Primary resistance, max (Ω)').fill('0.95');
     await specForm.getByRole('button', { name: 'Save spec' }).click();

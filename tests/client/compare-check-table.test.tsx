@@ -1,7 +1,7 @@
 import { cleanup, render, screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
 import { VERDICTS, type CheckRow } from '@shared/schemas/compat';
-import { CheckTable } from '@/components/compat/check-table';
+import { CheckTable } from '@/features/compat/components/check-table';
 import { formatFigure } from '@shared/format';
 
 const rows: CheckRow[] = [

@@ -56,9 +56,9 @@ describe('Form and Field on a shared schema', () => {
     expect(input().getAttribute('aria-invalid')).toBe('true');
     expect(screen.getByTestId('result').textContent).toBe('out of date: check again');
     fireEvent.click(screen.getByRole('button', { name: 'Check' }));
-    // plugSpecFields.reachMm is at most 40 mm: the message says so with the field's label.
+    // plugSpecFields.reachMm is at most 40 mm: the message says so with the field's label and unit.
     fireEvent.change(input(), { target: { value: '41' } });
-    await waitFor(() => expect(error()).toBe('Reach must be at most 40'));
+    await waitFor(() => expect(error()).toBe('Reach must be at most 40\u00a0mm'));
     fireEvent.change(input(), { target: { value: '' } });
     await waitFor(() => expect(error()).toBe('Reach is required'));
     expect(onCheck).toHaveBeenCalledTimes(1);

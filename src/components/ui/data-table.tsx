@@ -58,6 +58,8 @@ export interface DataTableProps<T> {
   /** ↑ on the first row: give the keyboard back (to a search box). */
   onLeaveTop?: () => void;
   rowClassName?: (row: T) => string;
+  /** `data-*` attributes of a row (`{ 'data-check': id }`), for print styles and tests to find it. */
+  rowData?: (row: T) => Record<`data-${string}`, string>;
   ref?: Ref<DataTableHandle>;
 }
 
@@ -107,6 +109,7 @@ export function DataTable<T>({
   openRowId = null,
   onLeaveTop,
   rowClassName,
+  rowData,
   ref,
 }: DataTableProps<T>) {
   const [ownSorting, setOwnSorting] = useState<SortingState>(initialSorting);
@@ -202,6 +205,7 @@ export function DataTable<T>({
                       },
                     }
                   : {})}
+                {...rowData?.(row.original)}
                 aria-current={isOpen || undefined}
                 className={`border-b border-ink/5 align-top ${
                   grid ? `cursor-pointer outline-offset-[-3px] ${isSelected ? 'bg-accent-soft' : 'hover:bg-paper-sunk'}` : ''

@@ -29,7 +29,7 @@ import type { z } from 'zod';
 import { WHOLE_BODY } from '@shared/validation/field-issues';
 import { plainWords } from '@shared/validation/plain-words';
 import { CheckboxField, controlClass, FieldFrame, type ControlIds } from './field';
-import { apiFieldIssues, labelledMessage } from './field-errors';
+import { apiFieldIssues, labelledMessage, specLabelOf } from './field-errors';
 import { ErrorNote } from './panel';
 
 /**
@@ -93,7 +93,13 @@ export function Form<TIn extends FieldValues, TOut>({
     }),
     [],
   );
-  const labelOf = useCallback((key: string) => labels.current.get(key), []);
+  // A schema names a sibling by its own key ("primaryOhmMax"), the form by its path ("spec.primaryOhmMax").
+  const labelOf = useCallback((key: string) => {
+    const exact = labels.current.get(key);
+    if (exact !== undefined) return exact;
+    for (const [name, label] of labels.current) if (name.endsWith(`.${key}`)) return label;
+    return specLabelOf(key);
+  }, []);
 
   const { setError } = form;
   useEffect(() => {
@@ -131,12 +137,12 @@ export function Form<TIn extends FieldValues, TOut>({
 }
 
 /** The message of one field of the enclosing Form, in words, with its label; undefined when it is valid. */
-export function useFieldError(name: string, label: string): string | undefined {
+export function useFieldError(name: string, label: string, unit?: string): string | undefined {
   const { control } = useFormContext();
   const { errors } = useFormState({ control, name });
   const labelOf = useContext(LabelsContext);
   const message = (get(errors, name) as { message?: unknown } | undefined)?.message;
-  return typeof message === 'string' && message !== '' ? labelledMessage(label, message, labelOf) : undefined;
+  return typeof message === 'string' && message !== '' ? labelledMessage(label, message, labelOf, unit) : undefined;
 }
 
 function useRegisteredLabel(name: string, label: string) {
@@ -154,11 +160,11 @@ export interface FormFieldFrameProps {
 }
 
 /** FieldFrame for a control of your own inside a Form (a Controller, a combobox): the error comes from the form. */
-export function FormFieldFrame({ name, label, children, ...rest }: FormFieldFrameProps) {
+export function FormFieldFrame({ name, label, unit, children, ...rest }: FormFieldFrameProps) {
   useRegisteredLabel(name, label);
-  const error = useFieldError(name, label);
+  const error = useFieldError(name, label, unit);
   return (
-    <FieldFrame label={label} error={error} {...rest}>
+    <FieldFrame label={label} unit={unit} error={error} {...rest}>
       {children}
     </FieldFrame>
   );

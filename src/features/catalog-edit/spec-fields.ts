@@ -1,7 +1,8 @@
 import type { z } from 'zod';
 import { coilSpecSchema, plugSpecSchema, type CoilSpec, type PartKind, type PlugSpec, type ResolvedPlugSpec } from '@shared/schemas/specs';
-import { inFormWords } from '@/components/ui/field-errors';
-import { COIL_SPEC_FIELDS, PLUG_SPEC_FIELDS, specField, type SpecFieldDef } from '@shared/spec-fields';
+import { readsOnFromField } from '@shared/validation/field-issues';
+import { inFormWords, labelledMessage } from '@/components/ui/field-errors';
+import { COIL_SPEC_FIELDS, PLUG_SPEC_FIELDS, specField, specLabel, type SpecFieldDef } from '@shared/spec-fields';
 
 /**
  * The spec of a catalog part as the buyer types it: one field per stored spec field of
@@ -59,10 +60,16 @@ function toInput(kind: PartKind, values: SpecValues): Record<string, unknown> {
   return out;
 }
 
-/** A schema message in the form's words: field names become their labels. */
-export const specMessage = (message: string): string => inFormWords(message, (key) => specField(key)?.label);
+/**
+ * A schema message in the form's words: field names become their labels, and a phrase that reads
+ * on from its field ("must not be above the window's max") is led by the field's label.
+ */
+export const specMessage = (message: string, field?: string): string =>
+  field !== undefined && readsOnFromField(message)
+    ? labelledMessage(specLabel(field), message)
+    : inFormWords(message, (key) => specField(key)?.label);
 
-function issueWords(issue: z.core.$ZodIssue, input: unknown): string {
+function issueWords(issue: z.core.$ZodIssue, input: unknown, field: string): string {
   if (input === undefined) return 'required';
   if (typeof input === 'number' && Number.isNaN(input)) return 'not a number';
   if (issue.code === 'too_small' && typeof issue.minimum === 'number')
@@ -70,7 +77,7 @@ function issueWords(issue: z.core.$ZodIssue, input: unknown): string {
   if (issue.code === 'too_big' && typeof issue.maximum === 'number')
     return issue.inclusive ? `at most ${issue.maximum}` : `must be below ${issue.maximum}`;
   if (issue.code === 'invalid_type' && issue.expected === 'int') return 'a whole number';
-  return specMessage(issue.message);
+  return specMessage(issue.message, field);
 }
 
 /** A parsed spec as the part bodies carry it: under `coil` or under `plug`. */
@@ -81,7 +88,7 @@ function errorsOf(error: z.ZodError, input: Record<string, unknown>): Record<str
   const errors: Record<string, string> = {};
   for (const issue of error.issues) {
     const key = issue.path.join('.');
-    errors[key] ??= issueWords(issue, input[key]);
+    errors[key] ??= issueWords(issue, input[key], key);
   }
   if (errors.heatCode === 'required') errors.heatCode = 'choose the heat code';
   return errors;
@@ -98,4 +105,5 @@ export function parseSpec(kind: PartKind, values: SpecValues): SpecParse {
   return r.success ? { ok: true, body: { plug: r.data } } : { ok: false, errors: errorsOf(r.error, input) };
 }
 
-export { formatSpecValue as specFigure, specLabel } from '@shared/spec-fields';
+export { formatSpecValue as specFigure } from '@shared/spec-fields';
+export { specLabel };

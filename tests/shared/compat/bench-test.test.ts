@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { benchTest, copperResistanceAt20, type BenchTestInput } from '../../../shared/compat/bench-test';
+import { benchTest, copperResistanceAt20, OPEN_CIRCUIT_OHM, type BenchTestInput } from '../../../shared/compat/bench-test';
 import { CompatInputError } from '../../../shared/compat/errors';
 import { DEFAULT_COMPAT_SETTINGS } from '../../../shared/compat/settings';
 
@@ -54,6 +54,31 @@ describe('bench test', () => {
     expect(result.secondaryVerdict).toBeNull();
     expect(result.reason).toMatch(/^The primary .*\.$/);
     if (verdict === 'open') expect(result.primaryAt20Ohm).toBeNull();
+  });
+
+  it('calls a reading at the meter\'s overload open, not out of spec', () => {
+    // A common 4000-count handheld multimeter's top resistance range is 40 MΩ and it shows "OL"
+    // (overload) above it: no continuity (common practice, from memory).
+    expect(OPEN_CIRCUIT_OHM).toBe(40e6);
+    const overload = run({ primaryOhm: 1e9 });
+    expect(overload).toMatchObject({ verdict: 'open', primaryVerdict: 'open', primaryAt20Ohm: null });
+    expect(overload.reason).toMatch(/open circuit/);
+    expect(overload.reason).not.toMatch(/outside/);
+    expect(run({ primaryOhm: OPEN_CIRCUIT_OHM }).verdict).toBe('open');
+    // Just under the overload is a (very bad) continuity reading: out of spec.
+    expect(run({ primaryOhm: 39e6 }).verdict).toBe('out-of-spec');
+    // The secondary in kΩ: 40 000 kΩ is the same 40 MΩ.
+    expect(run({ secondaryKohm: 40_000 })).toMatchObject({ secondaryVerdict: 'open', secondaryAt20Kohm: null });
+    expect(run({ secondaryKohm: 39_000 }).secondaryVerdict).toBe('out-of-spec');
+  });
+
+  it('states a reading taken at 20 °C once, and the correction only away from it', () => {
+    // At the reference temperature the corrected value is the reading (R20 = R_T when T = 20 °C).
+    const at20 = run({ primaryOhm: 0.6, coilTempC: 20 }).reason;
+    expect(at20).toBe('The primary reads 0.600 Ω at 20 °C, inside its 0.50–0.90 Ω window.');
+    expect(at20.match(/at 20 °C/g)).toHaveLength(1);
+    // 0.62 Ω at 20.5 °C: 0.62 / (1 + 0.00393 × 0.5) = 0.619 Ω at 20 °C, both stated.
+    expect(run({ primaryOhm: 0.62, coilTempC: 20.5 }).reason).toMatch(/reads 0\.619 Ω at 20 °C \(0\.620 Ω at 20\.5 °C\)/);
   });
 
   it('judges the secondary too and reports the worse of the two', () => {

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import type { FitReportBody } from '@shared/schemas/fit-reports';
 import { fieldErrorsOf } from '@/components/ui/field-errors';
 import { Button } from '@/components/ui/button';
@@ -14,6 +15,10 @@ import { SaveFitReportForm } from '@/features/fit-reports/components/save-fit-re
 /** Compare: an original against a substitute on an engine, row by row, with both charts. */
 export function ComparePage() {
   const sel = useCompareSelection();
+  // A typed-in spec edited since it was used: the verdict on screen no longer belongs to it.
+  const [editedOriginal, setEditedOriginal] = useState(false);
+  const [editedSubstitute, setEditedSubstitute] = useState(false);
+  const outOfDate = editedOriginal || editedSubstitute;
   const request = sel.request;
   const coil = useCompareCoils(request?.kind === 'coil' ? request.body : null);
   const plug = useComparePlugs(request?.kind === 'plug' ? request.body : null);
@@ -30,7 +35,7 @@ export function ComparePage() {
       ? { kind: 'coil', inputs: request.body }
       : { kind: 'plug', inputs: request.body }
     : null;
-  const result = request && !query.isPlaceholderData ? query.data : undefined;
+  const result = request && !query.isPlaceholderData && !outOfDate ? query.data : undefined;
 
   return (
     <>
@@ -39,7 +44,7 @@ export function ComparePage() {
       </PageHeader>
       <div className="flex flex-col gap-4">
         <EnginePicker engineId={sel.engineId} error={errors.engine.engineId ?? errors.engine['']} onPick={sel.setEngine} />
-        <div className="grid items-start gap-4 lg:grid-cols-2">
+        <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-4 lg:grid-cols-2">
           <SidePicker
             key={`original-${sel.kind}`}
             title="Original"
@@ -51,6 +56,7 @@ export function ComparePage() {
             onPickPart={(id) => sel.pickPart('original', id)}
             onTypeSpec={(t) => sel.typeSpec('original', t)}
             onClearSpec={() => sel.clearSpec('original')}
+            onOutOfDate={setEditedOriginal}
           />
           <SidePicker
             key={`substitute-${sel.kind}`}
@@ -63,6 +69,7 @@ export function ComparePage() {
             onPickPart={(id) => sel.pickPart('substitute', id)}
             onTypeSpec={(t) => sel.typeSpec('substitute', t)}
             onClearSpec={() => sel.clearSpec('substitute')}
+            onOutOfDate={setEditedSubstitute}
           />
         </div>
         {sel.canSwap && (
@@ -74,6 +81,7 @@ export function ComparePage() {
         )}
         <ComparisonOutcome
           ready={request !== null}
+          outOfDate={outOfDate}
           pending={query.isFetching && !result}
           error={error}
           errorShownBySide={shownBySide}

@@ -1,7 +1,10 @@
-import { StatusBadge, type Verdict } from '@/components/compat/verdict-badge';
+import { createColumnHelper } from '@tanstack/react-table';
+import { useMemo } from 'react';
+import { COPPER_REFERENCE_C, isContinuity, type BenchVerdict } from '@shared/compat/bench-test';
 import { formatMeasure, formatRange } from '@shared/format';
-import type { BenchVerdict } from '@shared/compat/bench-test';
-import type { BenchResult } from '@shared/schemas/bench';
+import type { BenchBody, BenchResult } from '@shared/schemas/bench';
+import { DataTable } from '@/components/ui/data-table';
+import { StatusBadge, type Verdict } from '@/features/compat/components/verdict-badge';
 
 /** A bench verdict's word and the verdict look it takes: only "in spec" is good to fit. */
 export const BENCH_LOOK: Record<BenchVerdict, { tone: Verdict; label: string }> = {
@@ -16,19 +19,77 @@ function BenchBadge({ verdict, size }: { verdict: BenchVerdict; size?: 'sm' | 'l
   return <StatusBadge tone={look.tone} label={look.label} size={size} />;
 }
 
-export interface Readings {
-  primaryOhm: number | null;
-  secondaryKohm: number | null | undefined;
-  temperatureC: number;
+export type Readings = BenchBody['measured'];
+
+interface WindingRow {
+  winding: 'Primary' | 'Secondary';
+  /** The meter's reading in the winding's unit; undefined: not measured, null: no reading. */
+  reading: number | null | undefined;
+  /** The same reading in ohms, to tell an overload from a reading. */
+  readingOhm: number | null | undefined;
+  at20: number | null;
+  unit: 'Ω' | 'kΩ';
+  window: string;
+  verdict: BenchVerdict | null;
 }
+
+function readingText(row: WindingRow): string {
+  if (row.reading === undefined) return 'not measured';
+  if (row.reading === null) return 'no reading';
+  if (!isContinuity(row.readingOhm)) return 'over range';
+  return formatMeasure(row.reading, row.unit, 3);
+}
+
+const col = createColumnHelper<WindingRow>();
 
 /** The readings corrected to 20 °C against the coil's windows, with the verdict and its reason. */
 export function BenchResultView({ result, readings }: { result: BenchResult; readings: Readings }) {
   const w = result.window;
-  const secondaryWindow =
-    w.secondaryKohmMin != null && w.secondaryKohmMax != null ? formatRange(w.secondaryKohmMin, w.secondaryKohmMax, 'kΩ') : null;
-  const reading = (v: number | null | undefined, unit: string) =>
-    v === undefined ? 'not measured' : v === null ? 'no reading' : formatMeasure(v, unit, 3);
+  const tempC = readings.temperatureC;
+  // At 20 °C the corrected value is the reading: one column says it.
+  const corrected = tempC !== COPPER_REFERENCE_C;
+  const rows: WindingRow[] = [
+    {
+      winding: 'Primary',
+      reading: readings.primaryOhm,
+      readingOhm: readings.primaryOhm,
+      at20: result.primaryAt20Ohm,
+      unit: 'Ω',
+      window: formatRange(w.primaryOhmMin, w.primaryOhmMax, 'Ω'),
+      verdict: result.primaryVerdict,
+    },
+  ];
+  if (readings.secondaryKohm !== undefined) {
+    rows.push({
+      winding: 'Secondary',
+      reading: readings.secondaryKohm,
+      readingOhm: readings.secondaryKohm === null ? null : readings.secondaryKohm * 1000,
+      at20: result.secondaryAt20Kohm,
+      unit: 'kΩ',
+      window:
+        w.secondaryKohmMin != null && w.secondaryKohmMax != null ? formatRange(w.secondaryKohmMin, w.secondaryKohmMax, 'kΩ') : 'not stated',
+      verdict: result.secondaryVerdict,
+    });
+  }
+  const columns = useMemo(
+    () => [
+      col.accessor('winding', { header: 'Winding', meta: { cellClassName: 'font-semibold' } }),
+      col.accessor(readingText, { id: 'reading', header: `Reading at ${formatMeasure(tempC, '°C')}`, meta: { align: 'right' } }),
+      col.accessor((r) => (r.at20 === null ? '—' : formatMeasure(r.at20, r.unit, 3)), {
+        id: 'at20',
+        header: `Corrected to ${COPPER_REFERENCE_C} °C`,
+        meta: { align: 'right', cellClassName: 'font-semibold' },
+      }),
+      col.accessor('window', { header: `Window at ${COPPER_REFERENCE_C} °C`, meta: { align: 'right' } }),
+      col.display({
+        id: 'verdict',
+        header: 'Verdict',
+        cell: ({ row }) =>
+          row.original.verdict ? <BenchBadge verdict={row.original.verdict} /> : <span className="text-ink-soft">no window</span>,
+      }),
+    ],
+    [tempC],
+  );
   return (
     <div className="flex flex-col gap-3" aria-label="Bench test result" role="region">
       <div className="flex flex-wrap items-center gap-3">
@@ -39,63 +100,7 @@ export function BenchResultView({ result, readings }: { result: BenchResult; rea
         {result.coil && <span className="text-ink-soft">{result.coil.label}</span>}
       </div>
       <p className="text-[16px] leading-snug text-ink">{result.reason}</p>
-      <div className="overflow-x-auto">
-        <table className="w-full border-collapse text-left text-[15px] tabular-nums">
-          <thead>
-            <tr className="border-b-2 border-ink/15 text-xs font-semibold uppercase tracking-wide text-ink-soft">
-              <th scope="col" className="py-2 pr-3">
-                Winding
-              </th>
-              <th scope="col" className="py-2 pr-3">
-                Reading at {formatMeasure(readings.temperatureC, '°C')}
-              </th>
-              <th scope="col" className="py-2 pr-3">
-                Corrected to 20&nbsp;°C
-              </th>
-              <th scope="col" className="py-2 pr-3">
-                Window at 20&nbsp;°C
-              </th>
-              <th scope="col" className="py-2">
-                Verdict
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            <tr className="border-b border-ink/10">
-              <th scope="row" className="py-2 pr-3 font-semibold">
-                Primary
-              </th>
-              <td className="py-2 pr-3">{reading(readings.primaryOhm, 'Ω')}</td>
-              <td className="py-2 pr-3 font-semibold">
-                {result.primaryAt20Ohm === null ? '—' : formatMeasure(result.primaryAt20Ohm, 'Ω', 3)}
-              </td>
-              <td className="py-2 pr-3">{formatRange(w.primaryOhmMin, w.primaryOhmMax, 'Ω')}</td>
-              <td className="py-2">
-                <BenchBadge verdict={result.primaryVerdict} />
-              </td>
-            </tr>
-            {readings.secondaryKohm !== undefined && (
-              <tr className="border-b border-ink/10">
-                <th scope="row" className="py-2 pr-3 font-semibold">
-                  Secondary
-                </th>
-                <td className="py-2 pr-3">{reading(readings.secondaryKohm, 'kΩ')}</td>
-                <td className="py-2 pr-3 font-semibold">
-                  {result.secondaryAt20Kohm === null ? '—' : formatMeasure(result.secondaryAt20Kohm, 'kΩ', 2)}
-                </td>
-                <td className="py-2 pr-3">{secondaryWindow ?? 'not stated'}</td>
-                <td className="py-2">
-                  {result.secondaryVerdict ? (
-                    <BenchBadge verdict={result.secondaryVerdict} />
-                  ) : (
-                    <span className="text-ink-soft">no window</span>
-                  )}
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
-      </div>
+      <DataTable label="Windings" data={rows} columns={columns} getRowId={(r) => r.winding} columnVisibility={{ at20: corrected }} />
     </div>
   );
 }

@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { createInterchangeBodySchema } from '@shared/schemas/interchange';
 import { issuesByPath } from '@/components/ui/field-errors';
-import { VerdictBadge } from '@/components/compat/verdict-badge';
+import { VerdictBadge } from '@/features/compat/components/verdict-badge';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNote } from '@/components/ui/panel';

@@ -78,7 +78,7 @@ export function SpecFields({
           const v = values[f.name];
           const text = typeof v === 'string' ? v : '';
           const raw = errors[f.name];
-          const error = raw === undefined ? undefined : specMessage(raw);
+          const error = raw === undefined ? undefined : specMessage(raw, f.name);
           if (f.input === 'checkbox') return null;
           if (f.name === 'heatCode')
             return (

@@ -7,7 +7,7 @@ import type { Alternate } from '@shared/schemas/alternates';
 import { compareHref } from '../compare-link';
 import { yesNo } from '@shared/format';
 import { PriceNote } from './price-note';
-import { VerdictBadge } from '@/components/compat/verdict-badge';
+import { VerdictBadge } from '@/features/compat/components/verdict-badge';
 
 /** The checks that decided a verdict other than go, worst first: what the clerk must know. */
 function deciding(alt: Alternate): string[] {

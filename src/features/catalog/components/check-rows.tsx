@@ -1,7 +1,7 @@
 import type { CheckRow } from '@shared/schemas/compat';
-import { checkLabel } from '@/components/compat/check-labels';
+import { checkLabel } from '@/features/compat/components/check-labels';
 import { formatFigure } from '@shared/format';
-import { VerdictBadge } from '@/components/compat/verdict-badge';
+import { VerdictBadge } from '@/features/compat/components/verdict-badge';
 
 /**
  * A verdict's checks for the narrow part panel: each check that is not go with both figures and

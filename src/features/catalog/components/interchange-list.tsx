@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { normalizePartNumber } from '@shared/part-number';
-import { checkLabel } from '@/components/compat/check-labels';
-import { VerdictBadge } from '@/components/compat/verdict-badge';
+import { checkLabel } from '@/features/compat/components/check-labels';
+import { VerdictBadge } from '@/features/compat/components/verdict-badge';
 import type { InterchangeRow } from '@shared/schemas/parts';
 import { compareHref } from '../compare-link';
 import { formatPercent } from '@shared/format';

@@ -7,7 +7,7 @@ import type { Fitment } from '@shared/schemas/vehicles';
 import { compareHref } from '../compare-link';
 import { AlternatesList } from './alternates-list';
 import { CheckRows } from './check-rows';
-import { VerdictBadge } from '@/components/compat/verdict-badge';
+import { VerdictBadge } from '@/features/compat/components/verdict-badge';
 
 export const NO_SPEC_NOTE = 'no spec — no verdict';
 

@@ -1,5 +1,5 @@
 import type { CompatResult } from '@shared/schemas/compat';
-import { CompatResultView } from '@/components/compat/compat-result-view';
+import { CompatResultView } from '@/features/compat/components/compat-result-view';
 import { ErrorNote } from '@/components/ui/panel';
 
 /**
@@ -8,12 +8,15 @@ import { ErrorNote } from '@/components/ui/panel';
  */
 export function ComparisonOutcome({
   ready,
+  outOfDate,
   pending,
   error,
   errorShownBySide,
   result,
 }: {
   ready: boolean;
+  /** A typed-in spec was edited since it was used: no verdict is current. */
+  outOfDate: boolean;
   pending: boolean;
   error: Error | null;
   errorShownBySide: boolean;
@@ -23,6 +26,17 @@ export function ComparisonOutcome({
     return (
       <p className="rounded-lg border border-dashed border-ink/25 px-4 py-6 text-center text-ink-soft">
         Choose the engine, the original and the substitute to see the verdict.
+      </p>
+    );
+  }
+  if (outOfDate) {
+    return (
+      <p
+        role="status"
+        data-testid="compare-out-of-date"
+        className="rounded-lg border border-review/40 bg-review-soft px-4 py-3 text-review"
+      >
+        The typed-in spec changed since it was used: press Use this spec for a verdict on what is shown.
       </p>
     );
   }

@@ -3,7 +3,6 @@ import type { CoilSpec, PartKind, ResolvedPlugSpec } from '@shared/schemas/specs
 import { Button } from '@/components/ui/button';
 import { Panel } from '@/components/ui/panel';
 import { usePart } from '../api/get-part';
-import { emptyValues, valuesOf } from '../spec-fields';
 import { PartSearch } from './part-search';
 import { SpecForm, type TypedSpec } from './spec-form';
 import { SpecSummary } from './spec-summary';
@@ -39,6 +38,7 @@ export function SidePicker({
   onPickPart,
   onTypeSpec,
   onClearSpec,
+  onOutOfDate,
 }: {
   title: 'Original' | 'Substitute';
   kind: PartKind;
@@ -54,18 +54,16 @@ export function SidePicker({
   onTypeSpec: (typed: TypedSpec) => void;
   /** Back to the catalog part: the typed-in spec is dropped. */
   onClearSpec: () => void;
+  /** The typed-in spec on screen differs from the one in use (see SpecForm). */
+  onOutOfDate: (outOfDate: boolean) => void;
 }) {
   const [mode, setMode] = useState<Mode>(typed ? 'spec' : 'auto');
   const part = usePart(partId);
   const shownMode = mode === 'auto' ? (partId ? 'catalog' : 'search') : mode;
   const ownSpec = typed?.spec ?? part.data?.spec ?? null;
-  const initial = ownSpec ? valuesOf(kind, ownSpec) : startFrom ? valuesOf(kind, startFrom) : emptyValues(kind);
-  const specErrors = Object.fromEntries(
-    Object.entries(errors)
-      .filter(([k]) => k.startsWith('spec.'))
-      .map(([k, v]) => [k.slice(5), v]),
-  );
-  const sideError = errors[''] ?? errors.partId ?? errors.spec;
+  const initial = ownSpec ?? startFrom ?? null;
+  // The form checks the API's own schema first; what the API still refuses is shown for the side.
+  const sideError = errors[''] ?? errors.partId ?? errors.spec ?? Object.entries(errors).find(([k]) => k.startsWith('spec.'))?.[1];
 
   const pick = (id: string) => {
     onPickPart(id);
@@ -160,8 +158,9 @@ export function SidePicker({
               name={`${title} spec`}
               kind={kind}
               initial={initial}
-              serverErrors={specErrors}
+              applied={typed !== null}
               onSubmit={onTypeSpec}
+              onOutOfDate={onOutOfDate}
             />
           </>
         )}

@@ -1,96 +1,114 @@
-import { useId, useState, type FormEvent } from 'react';
-import type { CoilSpec, PartKind, ResolvedPlugSpec } from '@shared/schemas/specs';
+import { useEffect } from 'react';
+import type { DefaultValues, FieldValues, UseFormReturn } from 'react-hook-form';
+import type { z } from 'zod';
+import { coilSpecSchema, resolvedPlugSpecSchema, type CoilSpec, type PartKind, type ResolvedPlugSpec } from '@shared/schemas/specs';
+import { specFieldsOf, type SpecFieldDef } from '@shared/spec-fields';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
-import { fieldsFor, parseCoilSpec, parsePlugSpec, specMessage, type FormValues } from '../spec-fields';
+import { Field, FieldCheckbox, FieldSelect, Form, useResultIsCurrent, useSchemaForm } from '@/components/ui/form';
 
 export type TypedSpec = { kind: 'coil'; spec: CoilSpec } | { kind: 'plug'; spec: ResolvedPlugSpec };
 
-function CheckboxField({ label, checked, onChange }: { label: string; checked: boolean; onChange: (v: boolean) => void }) {
-  const id = useId();
-  return (
-    <div className="flex items-center gap-2 self-end pb-2">
-      <input id={id} type="checkbox" checked={checked} onChange={(e) => onChange(e.target.checked)} className="h-4 w-4 accent-accent" />
-      <label htmlFor={id} className="text-[15px] text-ink">
-        {label}
-      </label>
-    </div>
-  );
+interface SpecFormProps {
+  /** The spec to start typing from (the part's, the typed one in use, the original's); none: empty. */
+  initial: CoilSpec | ResolvedPlugSpec | null;
+  /** Whether this form's spec is the one the comparison uses now. */
+  applied: boolean;
+  submitLabel?: string;
+  /** The form's accessible name, e.g. "Substitute spec". */
+  name: string;
+  onSubmit: (typed: TypedSpec) => void;
+  /**
+   * Whether what the form shows differs from what the comparison uses (an edit since "Use this
+   * spec", valid or not): the page then stops showing the verdict as current.
+   */
+  onOutOfDate: (outOfDate: boolean) => void;
 }
 
 /**
- * Every spec field of a coil or a plug, with its unit: for a part we do not stock, or a coil a
- * technician measured. Checked with the API's own schema before it is used; the API's field
- * messages (serverErrors) are shown by their fields too.
+ * Every spec field of a coil or a plug, with its unit (shared/spec-fields.ts): for a part we do
+ * not stock, or a coil a technician measured. Checked with the API's own schema before it is used.
  */
-export function SpecForm({
-  kind,
-  initial,
-  serverErrors = {},
-  submitLabel = 'Use this spec',
-  onSubmit,
-  name,
-}: {
-  kind: PartKind;
-  initial: FormValues;
-  serverErrors?: Record<string, string>;
-  submitLabel?: string;
-  onSubmit: (typed: TypedSpec) => void;
-  /** The form's accessible name, e.g. "Substitute spec". */
-  name: string;
-}) {
-  const [values, setValues] = useState<FormValues>(initial);
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const set = (field: string, v: string | boolean) => setValues((prev) => ({ ...prev, [field]: v }));
+export function SpecForm({ kind, initial, ...props }: SpecFormProps & { kind: PartKind }) {
+  return kind === 'coil' ? <CoilSpecForm initial={initial} {...props} /> : <PlugSpecForm initial={initial} {...props} />;
+}
 
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    if (kind === 'coil') {
-      const r = parseCoilSpec(values);
-      if (r.ok) onSubmit({ kind, spec: r.spec });
-      setErrors(r.ok ? {} : r.errors);
-    } else {
-      const r = parsePlugSpec(values);
-      if (r.ok) onSubmit({ kind, spec: r.spec });
-      setErrors(r.ok ? {} : r.errors);
-    }
-  };
+/** Selects on their first option, tick boxes off: the values a form starts from with no spec. */
+function startValues(fields: readonly SpecFieldDef[], initial: object | null): Record<string, unknown> {
+  const start: Record<string, unknown> = {};
+  for (const f of fields) {
+    if (f.input === 'select') start[f.name] = f.options?.[0];
+    else if (f.input === 'checkbox') start[f.name] = false;
+  }
+  return { ...start, ...initial };
+}
+
+function CoilSpecForm({ initial, onSubmit, ...props }: SpecFormProps) {
+  const form = useSchemaForm(coilSpecSchema, {
+    defaultValues: startValues(specFieldsOf('coil'), initial) as DefaultValues<z.input<typeof coilSpecSchema>>,
+  });
+  return <SpecFormOn form={form} kind="coil" onSubmit={(spec) => onSubmit({ kind: 'coil', spec })} {...props} />;
+}
+
+function PlugSpecForm({ initial, onSubmit, ...props }: SpecFormProps) {
+  const form = useSchemaForm(resolvedPlugSpecSchema, {
+    defaultValues: startValues(specFieldsOf('plug'), initial) as DefaultValues<z.input<typeof resolvedPlugSpecSchema>>,
+  });
+  return <SpecFormOn form={form} kind="plug" onSubmit={(spec) => onSubmit({ kind: 'plug', spec })} {...props} />;
+}
+
+function SpecFormOn<TIn extends FieldValues, TOut>({
+  form,
+  kind,
+  applied,
+  submitLabel = 'Use this spec',
+  name,
+  onSubmit,
+  onOutOfDate,
+}: Omit<SpecFormProps, 'initial' | 'onSubmit'> & {
+  form: UseFormReturn<TIn, unknown, TOut>;
+  kind: PartKind;
+  onSubmit: (spec: TOut) => void;
+}) {
+  const { isCurrent, shown } = useResultIsCurrent(form);
+  const { isDirty } = form.formState;
+  // A spec in use, shown again (the form reopened): what is on screen is what is used.
+  useEffect(() => {
+    if (applied) shown();
+  }, [applied, shown]);
+  const outOfDate = applied ? !isCurrent : isDirty;
+  useEffect(() => {
+    onOutOfDate(outOfDate);
+  }, [outOfDate, onOutOfDate]);
+  useEffect(() => () => onOutOfDate(false), [onOutOfDate]);
 
   return (
-    <form aria-label={name} onSubmit={submit} noValidate className="flex flex-col gap-3">
+    <Form
+      form={form}
+      aria-label={name}
+      onSubmit={(spec) => {
+        shown();
+        onSubmit(spec);
+      }}
+      className="flex flex-col gap-3"
+    >
       <div className="grid grid-cols-[repeat(auto-fill,minmax(14rem,1fr))] gap-x-3 gap-y-2.5">
-        {fieldsFor(kind).map((f) => {
-          const server = serverErrors[f.name];
-          const error = errors[f.name] ?? (server ? specMessage(server) : undefined);
-          const v = values[f.name];
-          if (f.input === 'checkbox')
-            return <CheckboxField key={f.name} label={f.label} checked={v === true} onChange={(c) => set(f.name, c)} />;
+        {specFieldsOf(kind).map((f) => {
+          if (f.input === 'checkbox') return <FieldCheckbox key={f.name} name={f.name} label={f.label} />;
+          const hint = f.hint ?? (f.optional ? 'optional' : undefined);
           if (f.input === 'select') {
-            return (
-              <SelectField
-                key={f.name}
-                label={f.label}
-                value={typeof v === 'string' ? v : ''}
-                onChange={(e) => set(f.name, e.target.value)}
-              >
-                {(f.options ?? []).map((o) => (
-                  <option key={o} value={o}>
-                    {o}
-                  </option>
-                ))}
-              </SelectField>
-            );
+            const options = (f.options ?? []).map((o) => ({ value: o, label: f.words?.[o] ?? o }));
+            return <FieldSelect key={f.name} name={f.name} label={f.label} hint={hint} options={options} />;
           }
+          const number = f.input !== 'text';
           return (
-            <TextField
+            <Field
               key={f.name}
+              name={f.name}
               label={f.label}
               unit={f.unit}
-              inputMode={f.input === 'text' ? 'text' : 'decimal'}
-              value={typeof v === 'string' ? v : ''}
-              onChange={(e) => set(f.name, e.target.value)}
-              hint={f.hint ?? (f.optional ? 'optional' : undefined)}
-              error={error}
+              hint={hint}
+              number={number}
+              blank={f.optional ? 'null' : number ? 'absent' : 'keep'}
             />
           );
         })}
@@ -100,6 +118,6 @@ export function SpecForm({
           {submitLabel}
         </Button>
       </div>
-    </form>
+    </Form>
   );
 }

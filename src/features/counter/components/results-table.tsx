@@ -1,8 +1,8 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo, type Ref } from 'react';
 import type { SearchHit } from '@shared/schemas/search';
-import { checkLabel } from '@/components/compat/check-labels';
-import { VerdictBadge } from '@/components/compat/verdict-badge';
+import { checkLabel } from '@/features/compat/components/check-labels';
+import { VerdictBadge } from '@/features/compat/components/verdict-badge';
 import { DataTable, type DataTableHandle } from '@/components/ui/data-table';
 import { matchLabel } from '../match-label';
 

@@ -1,5 +1,5 @@
 import type { FitReport } from '@shared/schemas/fit-reports';
-import { CompatResultView } from '@/components/compat/compat-result-view';
+import { CompatResultView } from '@/features/compat/components/compat-result-view';
 import { formatDateTime } from '@shared/format';
 
 /** The report itself, the same on screen, in its shared read-only view and on paper. */

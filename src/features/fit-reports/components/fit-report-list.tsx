@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { VerdictBadge } from '@/components/compat/verdict-badge';
+import { VerdictBadge } from '@/features/compat/components/verdict-badge';
 import type { FitReportSummary } from '@shared/schemas/fit-reports';
 import { formatDateTime } from '@shared/format';
 

@@ -41,7 +41,7 @@ export function CompatResultView({ result, heading }: { result: CompatResult; he
   const isCoil = result.kind === 'coil';
   return (
     <div className="flex flex-col gap-4">
-      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,26rem)]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,26rem)]">
         <section
           aria-label="Overall verdict"
           className="print-block flex flex-col gap-2 rounded-lg border border-ink/10 bg-paper-raised p-4 shadow-sm print:shadow-none"
@@ -79,7 +79,7 @@ export function CompatResultView({ result, heading }: { result: CompatResult; he
         <CheckTable checks={result.checks} originalLabel={result.original.label} substituteLabel={result.substitute.label} />
       </Section>
 
-      <div className={`grid gap-4 ${isCoil ? 'xl:grid-cols-2' : ''} print:grid-cols-1`}>
+      <div className={`grid grid-cols-[minmax(0,1fr)] gap-4 ${isCoil ? 'xl:grid-cols-2' : ''} print:grid-cols-1`}>
         {isCoil && result.currents && result.crankingCurrents && (
           <Section title="Primary current rise">
             <CurrentChart
