@@ -50,12 +50,7 @@ import {
   suppliersResponseSchema,
   updateSupplierBodySchema,
 } from '../../shared/schemas/suppliers';
-import {
-  brandIdParamSchema,
-  sellPriceRuleResponseSchema,
-  sellPriceRulesResponseSchema,
-  setSellPriceRuleBodySchema,
-} from '../../shared/schemas/sell-price';
+import { sellPriceRuleResponseSchema, sellPriceRulesResponseSchema, setSellPriceRuleBodySchema } from '../../shared/schemas/sell-price';
 import { healthResponseSchema, openApiDocumentSchema } from '../../shared/schemas/system';
 import {
   inviteBodySchema,
@@ -395,10 +390,10 @@ export const ROUTE_DOCS = {
     summary: "The sell-price rule: each brand's preferred supplier, or the lowest list price",
     responses: { 200: sellPriceRulesResponseSchema },
   },
-  'PUT /api/sell-price-rules/:brandId': {
+  'PUT /api/sell-price-rules/:id': {
     tag: 'suppliers',
     summary: "Prefer a supplier's price for a brand, or (null) sell at the lowest list price",
-    params: brandIdParamSchema,
+    params: idParamSchema,
     body: setSellPriceRuleBodySchema,
     responses: { 200: sellPriceRuleResponseSchema },
     errors: [409],

@@ -75,7 +75,7 @@ export const ROUTE_ACCESS = {
   'PATCH /api/suppliers/:id': BUYERS,
   // Everyone who sees a sell price may see the rule that chose it; buyers set it.
   'GET /api/sell-price-rules': COUNTER,
-  'PUT /api/sell-price-rules/:brandId': BUYERS,
+  'PUT /api/sell-price-rules/:id': BUYERS,
   'GET /api/price-lists': BUYERS_OR_WRITE_KEY,
   'POST /api/price-lists': BUYERS_OR_WRITE_KEY,
   'GET /api/price-lists/:id': BUYERS_OR_WRITE_KEY,

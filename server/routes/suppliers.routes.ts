@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { idParamSchema } from '../../shared/schemas/common';
-import { brandIdParamSchema, setSellPriceRuleBodySchema } from '../../shared/schemas/sell-price';
+import { setSellPriceRuleBodySchema } from '../../shared/schemas/sell-price';
 import { createSupplierBodySchema, suppliersQuerySchema, updateSupplierBodySchema } from '../../shared/schemas/suppliers';
 import type { AppDeps } from '../deps';
 import { currentUser } from '../middleware/auth';
@@ -36,8 +36,8 @@ export function supplierRoutes(deps: AppDeps): Router {
     res.json(presentSellPriceRules(await listRules(ds)));
   });
 
-  mount(r, 'PUT /api/sell-price-rules/:brandId', async (req, res) => {
-    const { brandId } = parseParams(brandIdParamSchema, req);
+  mount(r, 'PUT /api/sell-price-rules/:id', async (req, res) => {
+    const { id: brandId } = parseParams(idParamSchema, req);
     const body = parseBody(setSellPriceRuleBodySchema, req);
     res.json(presentSellPriceRule(await setRule(ds, currentUser(req).id, brandId, body)));
   });

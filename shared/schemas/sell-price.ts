@@ -28,9 +28,7 @@ export function sellPriceReasonText(b: Pick<SellPriceBasis, 'reason' | 'brand'>)
 
 // ---------- requests ----------
 
-export const brandIdParamSchema = z.object({ brandId: uuidSchema });
-
-/** PUT /api/sell-price-rules/:brandId: a preferred supplier, or null for the lowest list price. */
+/** PUT /api/sell-price-rules/:id: a preferred supplier, or null for the lowest list price. */
 export const setSellPriceRuleBodySchema = z.object({ supplierId: uuidSchema.nullable() });
 export type SetSellPriceRuleBody = z.infer<typeof setSellPriceRuleBodySchema>;
 
