@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { Mapping } from '@shared/price-list/mapping';
 import { priceListFileRefusalDetailsSchema, type PriceList, type PriceListCounts } from '@shared/schemas/price-lists';
-import { DELIMITER_LABELS, DELIMITERS, isDelimiter } from '@shared/price-list/delimiters';
+import { DELIMITER_LABELS, DELIMITERS, isDelimiter, type Delimiter } from '@shared/price-list/delimiters';
 import { counterPricesMessage, type CounterPrices } from '@shared/schemas/sell-price';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/dialog';
@@ -176,7 +176,8 @@ function StagedList({
   const valid = counts ? counts.total - counts.rejected : 0;
   const busy = preview.isPending || commit.isPending || discard.isPending;
   const blocked = list.stale ? 'stale' : dirty ? 'dirty' : valid === 0 ? 'empty' : null;
-  const delimiter = isDelimiter(list.delimiter) ? list.delimiter : ',';
+  // The select shows the buyer's last choice even when reading with it failed, so choosing back works.
+  const [delimiter, setDelimiter] = useState<Delimiter>(isDelimiter(list.delimiter) ? list.delimiter : ',');
 
   return (
     <div className="grid gap-4 lg:grid-cols-[minmax(340px,380px)_minmax(0,1fr)] lg:items-start">
@@ -189,7 +190,9 @@ function StagedList({
             disabled={busy}
             onChange={(e) => {
               const next = e.target.value;
-              if (isDelimiter(next)) preview.mutate({ id: list.id, delimiter: next });
+              if (!isDelimiter(next)) return;
+              setDelimiter(next);
+              preview.mutate({ id: list.id, delimiter: next });
             }}
           >
             {DELIMITERS.map((d) => (
