@@ -20,7 +20,8 @@ export const fitReportVehicleSchema = z.object({
 });
 export type FitReportVehicle = z.infer<typeof fitReportVehicleSchema>;
 
-const vehicleSchema = fitReportVehicleSchema.optional();
+/** The engine's name may be left to the server (the compared engine's label). */
+const vehicleSchema = fitReportVehicleSchema.partial({ engine: true }).optional();
 
 export const fitReportBodySchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('coil'), title: titleSchema, notes: notesSchema, vehicle: vehicleSchema, inputs: coilCompareBodySchema }),

@@ -61,7 +61,7 @@ export class FitReportService {
         shareToken: token,
         createdBy: user.id,
         shopId: user.shopId,
-        vehicle: body.vehicle ?? null,
+        vehicle: body.vehicle ? { ...body.vehicle, engine: body.vehicle.engine ?? result.engine.label } : null,
         prices,
       });
       await audit(m, {

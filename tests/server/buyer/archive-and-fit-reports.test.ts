@@ -103,5 +103,14 @@ describe('archiving, and what a fit report carries', () => {
     expect(await find(tag, 'include')).toEqual([report.id]);
     // The customer's link still opens it.
     await request(t.app).get(`/api/shared/fit-reports/${token}`).expect(200);
+
+    // From the Counter's link the vehicle comes without the engine's name: the compared engine's label is kept.
+    const picked = await clerk.agent
+      .post('/api/fit-reports')
+      .set('x-csrf-token', clerk.token)
+      .send({ kind: 'coil', vehicle: { year: 2014, make: vehicle.make, model: 'Estrel' }, inputs });
+    expect(picked.status, JSON.stringify(picked.body)).toBe(201);
+    const pickedReport = picked.body.fitReport as FitReport;
+    expect(pickedReport.vehicle?.engine).toBe(pickedReport.result.engine.label);
   });
 });
