@@ -57,6 +57,7 @@ export function presentChange(r: ChangeRow): PriceListChange {
     type: r.change,
     partId: r.part_id,
     partNumber: r.part_number,
+    catalogNumber: r.catalog_number,
     brand: r.brand,
     description: r.description,
     kind: r.part_kind ?? r.kind,

@@ -154,7 +154,10 @@ export const priceListChangeSchema = z
     line: z.number().int(),
     type: z.enum(['new', 'changed', 'unchanged']),
     partId: uuidSchema.nullable(),
+    /** As the supplier printed it. */
     partNumber: z.string(),
+    /** The catalog's number of the part it matched (null for a new part). */
+    catalogNumber: z.string().nullable(),
     brand: z.string(),
     description: z.string().nullable(),
     kind: z.enum(['coil', 'plug']).nullable(),

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { PartDetail } from '../../../shared/schemas/parts';
-import type { CommitPriceListResponse, PriceList } from '../../../shared/schemas/price-lists';
+import type { CommitPriceListResponse, PriceList, PriceListChanges } from '../../../shared/schemas/price-lists';
 import { counterPricesMessage, type SellPriceRulesResponse } from '../../../shared/schemas/sell-price';
 import { makeUser, TEST_PASSWORD } from '../../helpers/factories';
 import { newSupplier, post, stage, type Signed } from '../../helpers/price-list-api';
@@ -95,12 +95,17 @@ describe('the sell-price rule', () => {
         STANDARD_HEADER,
         [`QW-IC P${tag}1`, 'Quaywell', 'Coil, long boot', '21.00', '42.00', '0.00', 1, null, null, 'coil'],
         [`QW-IC P${tag}2`, 'Quaywell', 'Coil', '22.00', '44.00', '0.00', 1, null, null, 'coil'],
+        // The demo catalog's QW-SP 1406 (seed/data/parts.ts), printed the supplier's way.
+        ['qw-sp1406', 'Quaywell', 'Plug', '3.30', '7.59', '0.00', 4, null, null, 'plug'],
       ],
       { delimiter: '|' },
     );
     const guessed = await stage(buyer, { supplierId: supplier.id, file: pipe, fileName: 'pipe.txt' });
     expect(guessed.delimiter).toBe('|');
-    expect(guessed.counts).toMatchObject({ total: 2, new: 2, rejected: 0 });
+    expect(guessed.counts).toMatchObject({ total: 3, new: 2, changed: 1, rejected: 0 });
+    // The preview shows the catalog number the printed one matched.
+    const changes = (await buyer.agent.get(`/api/price-lists/${guessed.id}/changes?type=changed`).expect(200)).body as PriceListChanges;
+    expect(changes.changes.map((c) => [c.partNumber, c.catalogNumber])).toEqual([['qw-sp1406', 'QW-SP 1406']]);
 
     // Chosen explicitly on upload (a file whose first lines would mislead the guess).
     const chosen = await buyer.agent
