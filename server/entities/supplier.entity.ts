@@ -23,4 +23,8 @@ export class SupplierEntity {
 
   @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
   createdAt: Date;
+
+  /** Archived: hidden from pickers and lists; its price lists stay in the history. */
+  @Column({ type: 'timestamptz', name: 'archived_at', nullable: true })
+  archivedAt: Date | null;
 }

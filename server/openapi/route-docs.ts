@@ -18,7 +18,10 @@ import {
   emailSentResponseSchema,
   fitReportBodySchema,
   fitReportResponseSchema,
+  fitReportsQuerySchema,
   fitReportsResponseSchema,
+  sharedFitReportResponseSchema,
+  updateFitReportBodySchema,
   shareTokenParamSchema,
 } from '../../shared/schemas/fit-reports';
 import { createInterchangeBodySchema, interchangeResponseSchema } from '../../shared/schemas/interchange';
@@ -43,9 +46,11 @@ import { settingsResponseSchema, updateSettingsBodySchema } from '../../shared/s
 import {
   createSupplierBodySchema,
   supplierResponseSchema,
+  suppliersQuerySchema,
   suppliersResponseSchema,
   updateSupplierBodySchema,
 } from '../../shared/schemas/suppliers';
+import { sellPriceRuleResponseSchema, sellPriceRulesResponseSchema, setSellPriceRuleBodySchema } from '../../shared/schemas/sell-price';
 import { healthResponseSchema, openApiDocumentSchema } from '../../shared/schemas/system';
 import {
   inviteBodySchema,
@@ -305,7 +310,20 @@ export const ROUTE_DOCS = {
     responses: { 200: benchResultSchema },
   },
 
-  'GET /api/fit-reports': { tag: 'fit reports', summary: 'Fit reports, newest first', responses: { 200: fitReportsResponseSchema } },
+  'GET /api/fit-reports': {
+    tag: 'fit reports',
+    summary: 'Fit reports, newest first',
+    description: '`q` finds words in the title, note, vehicle, part numbers and engine; archived reports only with `archived=include`.',
+    query: fitReportsQuerySchema,
+    responses: { 200: fitReportsResponseSchema },
+  },
+  'PATCH /api/fit-reports/:id': {
+    tag: 'fit reports',
+    summary: 'Archive or restore a fit report',
+    params: idParamSchema,
+    body: updateFitReportBodySchema,
+    responses: { 200: fitReportResponseSchema },
+  },
   'POST /api/fit-reports': {
     tag: 'fit reports',
     summary: 'Save a comparison as a fit report',
@@ -328,9 +346,9 @@ export const ROUTE_DOCS = {
   },
   'GET /api/shared/fit-reports/:token': {
     tag: 'fit reports',
-    summary: 'A fit report by its share link (read-only, no sign-in)',
+    summary: 'A fit report by its share link (read-only, no sign-in, no staff name)',
     params: shareTokenParamSchema,
-    responses: { 200: fitReportResponseSchema },
+    responses: { 200: sharedFitReportResponseSchema },
   },
 
   'GET /api/settings': {
@@ -348,6 +366,8 @@ export const ROUTE_DOCS = {
   'GET /api/suppliers': {
     tag: 'suppliers',
     summary: 'Suppliers with their last committed price list',
+    description: 'Archived suppliers only with `archived=include`.',
+    query: suppliersQuerySchema,
     responses: { 200: suppliersResponseSchema },
   },
   'POST /api/suppliers': {
@@ -359,10 +379,23 @@ export const ROUTE_DOCS = {
   },
   'PATCH /api/suppliers/:id': {
     tag: 'suppliers',
-    summary: 'Change a supplier or its remembered column mapping',
+    summary: 'Change, archive or restore a supplier, or its remembered column mapping',
     params: idParamSchema,
     body: updateSupplierBodySchema,
     responses: { 200: supplierResponseSchema },
+    errors: [409],
+  },
+  'GET /api/sell-price-rules': {
+    tag: 'suppliers',
+    summary: "The sell-price rule: each brand's preferred supplier, or the lowest list price",
+    responses: { 200: sellPriceRulesResponseSchema },
+  },
+  'PUT /api/sell-price-rules/:id': {
+    tag: 'suppliers',
+    summary: "Prefer a supplier's price for a brand, or (null) sell at the lowest list price",
+    params: idParamSchema,
+    body: setSellPriceRuleBodySchema,
+    responses: { 200: sellPriceRuleResponseSchema },
     errors: [409],
   },
 

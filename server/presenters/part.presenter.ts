@@ -8,7 +8,7 @@ import type { ChainRow, PartRow } from '../repositories/parts.repository';
 import type { PriceRow } from '../repositories/prices.repository';
 import type { PartSpecs } from '../repositories/specs.repository';
 import type { StockLevel } from '../repositories/stock.repository';
-import { presentPrice, presentStock, sellPrice } from './stock-price.presenter';
+import { presentPrice, presentStock, sellPrice, sellPriceBasis } from './stock-price.presenter';
 
 export function presentPart(r: PartRow): PartSummary {
   return {
@@ -83,6 +83,7 @@ export function presentPartDetail(d: PartDetailRecord, role: Role): PartDetail {
     },
     stock: presentStock(d.stock.onHand, d.stock.bin, role),
     price: sellPrice(d.prices, role),
+    sellPriceBasis: sellPriceBasis(d.prices),
     prices: d.prices.map((p) => presentPrice(p, role)),
   };
 }

@@ -1,3 +1,4 @@
+import type { CounterPrices } from '../../shared/schemas/sell-price';
 import type {
   CommitPriceListResponse,
   PriceList,
@@ -56,6 +57,7 @@ export function presentChange(r: ChangeRow): PriceListChange {
     type: r.change,
     partId: r.part_id,
     partNumber: r.part_number,
+    catalogNumber: r.catalog_number,
     brand: r.brand,
     description: r.description,
     kind: r.part_kind ?? r.kind,
@@ -90,4 +92,7 @@ export const presentChanges = (rows: ChangeRow[], total: number): PriceListChang
 export const presentRowErrors = (rows: RowErrorRow[], total: number): PriceListErrors => ({ errors: rows.map(presentRowError), total });
 
 /** POST .../commit: the list as committed, and what could not follow (search index, e-mail). */
-export const presentCommitted = (r: PriceListRow, notices: string[]): CommitPriceListResponse => ({ ...presentPriceList(r), notices });
+export const presentCommitted = (
+  { list, counterPrices }: { list: PriceListRow; counterPrices: CounterPrices },
+  notices: string[],
+): CommitPriceListResponse => ({ ...presentPriceList(list), notices, counterPrices });

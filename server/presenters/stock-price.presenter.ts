@@ -1,5 +1,6 @@
 import { canSeeCost, type Role } from '../../shared/roles';
 import type { Price, StockView } from '../../shared/schemas/parts';
+import type { SellPriceBasis } from '../../shared/schemas/sell-price';
 import type { PriceRow } from '../repositories/prices.repository';
 
 /** Margin on the sell (list) price, in percent with one decimal. */
@@ -21,9 +22,21 @@ export function presentPrice(row: PriceRow, role: Role): Price {
   return { ...base, costCents: row.costCents, marginPct: marginPct(row.costCents, row.listCents) };
 }
 
-/** The row the store sells a part at: the lowest list price among its suppliers (then the lowest cost). */
+/** The row the store sells a part at, as the sell-price rule marked it (prices.repository.ts). */
 export function sellPriceRow(rows: readonly PriceRow[]): PriceRow | undefined {
-  return [...rows].sort((a, b) => a.listCents - b.listCents || a.costCents - b.costCents)[0];
+  return rows.find((r) => r.selling);
+}
+
+/** Which supplier's price the store sells at, and why. */
+export function sellPriceBasis(rows: readonly PriceRow[]): SellPriceBasis | null {
+  const row = sellPriceRow(rows);
+  if (!row) return null;
+  return {
+    supplierId: row.supplierId,
+    supplier: row.supplier,
+    brand: row.brand,
+    reason: row.preferred ? 'preferred-supplier' : 'lowest-list',
+  };
 }
 
 /** The store's sell price for a part, as the role may see it. */

@@ -12,6 +12,7 @@ export function presentSupplier(r: SupplierRow): Supplier {
     lastPriceListAt: r.last_at?.toISOString() ?? null,
     lastPriceListId: r.last_id,
     createdAt: r.created_at.toISOString(),
+    archivedAt: r.archived_at?.toISOString() ?? null,
   };
 }
 

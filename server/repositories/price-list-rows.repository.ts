@@ -10,6 +10,7 @@ const changeRowSchema = z.object({
   change: z.enum(['new', 'changed', 'unchanged']),
   part_id: z.string().nullable(),
   part_number: z.string(),
+  catalog_number: z.string().nullable(),
   brand: z.string(),
   description: z.string().nullable(),
   kind: partKindSchema.nullable(),
@@ -33,7 +34,8 @@ export type ChangeRow = z.infer<typeof changeRowSchema>;
 
 const CHANGE_COLUMNS = `line, change, part_id, part_number, brand, description, kind, part_kind, old_cost_cents, cost_cents,
   old_list_cents, list_cents, old_core_cents, core_cents, old_pack_qty, pack_qty, cost_change_pct, list_change_pct, flagged,
-  (coil IS NOT NULL OR plug IS NOT NULL) AS has_spec, supersedes, supersession`;
+  (coil IS NOT NULL OR plug IS NOT NULL) AS has_spec, supersedes, supersession,
+  (SELECT p.part_number FROM part p WHERE p.id = price_list_row.part_id) AS catalog_number`;
 
 /** Rows of the preview tables, in file order, with the count of all that match. */
 export async function listChangeRows(

@@ -202,6 +202,7 @@ const stagedFactsSchema = z.object({
   size_bytes: z.coerce.number().int(),
   data_lines: z.number().int().nullable(),
   file_name: z.string(),
+  delimiter: z.string().nullable(),
 });
 export type StagedFacts = z.infer<typeof stagedFactsSchema>;
 
@@ -210,7 +211,7 @@ export function stagedFacts(ex: Executor, id: string, forUpdate = false): Promis
   return queryOne(
     ex,
     stagedFactsSchema,
-    `SELECT supplier_id, status, columns, mapping, size_bytes, data_lines, file_name FROM price_list WHERE id = $1${forUpdate ? ' FOR UPDATE' : ''}`,
+    `SELECT supplier_id, status, columns, mapping, size_bytes, data_lines, file_name, delimiter FROM price_list WHERE id = $1${forUpdate ? ' FOR UPDATE' : ''}`,
     [id],
   );
 }

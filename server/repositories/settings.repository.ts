@@ -9,6 +9,7 @@ import { execute, queryOne, type Executor } from '../db/executor';
 const storedSettingsSchema = z.object({
   compat: z.looseObject({ loadPoints: z.looseObject({}).optional() }).optional(),
   priceList: z.looseObject({}).optional(),
+  store: z.looseObject({}).optional(),
 });
 export type StoredSettings = z.infer<typeof storedSettingsSchema>;
 

@@ -14,11 +14,12 @@ const supplierRowSchema = z.object({
   created_at: z.date(),
   last_id: z.string().nullable(),
   last_at: z.date().nullable(),
+  archived_at: z.date().nullable(),
 });
 export type SupplierRow = z.infer<typeof supplierRowSchema>;
 
 const SUPPLIER_SELECT = `
-SELECT s.id, s.key, s.name, s.contact_email, s.phone, s.mapping, s.created_at, last.id AS last_id, last.committed_at AS last_at
+SELECT s.id, s.key, s.name, s.contact_email, s.phone, s.mapping, s.created_at, s.archived_at, last.id AS last_id, last.committed_at AS last_at
   FROM supplier s
   LEFT JOIN LATERAL (
     SELECT pl.id, pl.committed_at FROM price_list pl
@@ -29,8 +30,14 @@ export function findSupplier(ex: Executor, id: string): Promise<SupplierRow | nu
   return queryOne(ex, supplierRowSchema, `${SUPPLIER_SELECT} WHERE s.id = $1`, [id]);
 }
 
-export function listSupplierRows(ex: Executor): Promise<SupplierRow[]> {
-  return queryRows(ex, supplierRowSchema, `${SUPPLIER_SELECT} ORDER BY s.name`);
+/** Active suppliers by name; archived ones too (after them) with `includeArchived`. */
+export function listSupplierRows(ex: Executor, includeArchived = false): Promise<SupplierRow[]> {
+  return queryRows(
+    ex,
+    supplierRowSchema,
+    `${SUPPLIER_SELECT} WHERE $1::boolean OR s.archived_at IS NULL ORDER BY s.archived_at IS NOT NULL, s.name`,
+    [includeArchived],
+  );
 }
 
 export interface SupplierFields {
@@ -39,9 +46,10 @@ export interface SupplierFields {
   contactEmail: string | null;
   phone: string | null;
   mapping: Mapping | null;
+  archived: boolean;
 }
 
-export function insertSupplier(ex: Executor, s: Omit<SupplierFields, 'mapping'>): Promise<string> {
+export function insertSupplier(ex: Executor, s: Omit<SupplierFields, 'mapping' | 'archived'>): Promise<string> {
   return insertReturningId(ex, `INSERT INTO supplier (key, name, contact_email, phone) VALUES ($1, $2, $3, $4) RETURNING id`, [
     s.key,
     s.name,
@@ -56,6 +64,7 @@ const COLUMN_OF: Record<keyof SupplierFields, string> = {
   contactEmail: 'contact_email',
   phone: 'phone',
   mapping: 'mapping',
+  archived: 'archived_at',
 };
 
 /** Writes the fields given (undefined ones are left as they are); false when there is no such supplier. */
@@ -65,6 +74,11 @@ export async function updateSupplierFields(ex: Executor, id: string, changes: Pa
   for (const field of Object.keys(COLUMN_OF) as (keyof SupplierFields)[]) {
     const value = changes[field];
     if (value === undefined) continue;
+    if (field === 'archived') {
+      // Archiving again keeps the first date.
+      sets.push(value ? `archived_at = coalesce(archived_at, now())` : `archived_at = NULL`);
+      continue;
+    }
     args.push(field === 'mapping' && value !== null ? JSON.stringify(value) : value);
     sets.push(`${COLUMN_OF[field]} = $${args.length}`);
   }

@@ -1,11 +1,17 @@
 import { Router } from 'express';
 import { idParamSchema } from '../../shared/schemas/common';
-import { emailFitReportBodySchema, fitReportBodySchema, shareTokenParamSchema } from '../../shared/schemas/fit-reports';
+import {
+  emailFitReportBodySchema,
+  fitReportBodySchema,
+  fitReportsQuerySchema,
+  shareTokenParamSchema,
+  updateFitReportBodySchema,
+} from '../../shared/schemas/fit-reports';
 import { appUrl } from '../config/env';
 import type { AppDeps } from '../deps';
 import { currentUser } from '../middleware/auth';
-import { parseBody, parseParams } from '../middleware/validate';
-import { presentEmailSent, presentFitReportResponse, presentFitReports } from '../presenters/fit-report.presenter';
+import { parseBody, parseParams, parseQuery } from '../middleware/validate';
+import { presentEmailSent, presentFitReportResponse, presentFitReports, presentSharedFitReport } from '../presenters/fit-report.presenter';
 import { FitReportService } from '../services/compat/fit-reports.service';
 import { mount } from './mount';
 
@@ -22,7 +28,14 @@ export function fitReportRoutes(deps: AppDeps): Router {
   });
 
   mount(r, 'GET /api/fit-reports', async (req, res) => {
-    res.json(presentFitReports(await reports().list(currentUser(req))));
+    const query = parseQuery(fitReportsQuerySchema, req);
+    res.json(presentFitReports(await reports().list(currentUser(req), query)));
+  });
+
+  mount(r, 'PATCH /api/fit-reports/:id', async (req, res) => {
+    const { id } = parseParams(idParamSchema, req);
+    const { archived } = parseBody(updateFitReportBodySchema, req);
+    res.json(presentFitReportResponse(await reports().setArchived(currentUser(req), id, archived), base()));
   });
 
   mount(r, 'GET /api/fit-reports/:id', async (req, res) => {
@@ -40,7 +53,7 @@ export function fitReportRoutes(deps: AppDeps): Router {
   // The share link: read-only, no sign-in, found only by its unguessable token.
   mount(r, 'GET /api/shared/fit-reports/:token', async (req, res) => {
     const { token } = parseParams(shareTokenParamSchema, req);
-    res.json(presentFitReportResponse(await reports().getShared(token), base()));
+    res.json(presentSharedFitReport(await reports().getShared(token), base()));
   });
 
   return r;

@@ -49,6 +49,7 @@ export function priceListRoutes(deps: AppDeps): Router {
         filePath: file.path,
         sizeBytes: file.size,
         mapping: fields.mapping,
+        delimiter: fields.delimiter,
         id: fields.uploadId,
         actorId: currentUser(req).id,
         ...settings,
@@ -87,7 +88,7 @@ export function priceListRoutes(deps: AppDeps): Router {
   mount(r, 'POST /api/price-lists/:id/preview', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const body = parseBody(previewPriceListBodySchema, req);
-    res.json(presentPriceList(await previewPriceList(deps, { id, mapping: body.mapping })));
+    res.json(presentPriceList(await previewPriceList(deps, { id, mapping: body.mapping, delimiter: body.delimiter })));
   });
 
   mount(r, 'POST /api/price-lists/:id/commit', async (req, res) => {

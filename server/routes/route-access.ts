@@ -65,6 +65,7 @@ export const ROUTE_ACCESS = {
   'GET /api/fit-reports': COMPARE,
   'POST /api/fit-reports': COMPARE,
   'GET /api/fit-reports/:id': COMPARE,
+  'PATCH /api/fit-reports/:id': COMPARE,
   'POST /api/fit-reports/:id/email': COMPARE,
   'GET /api/shared/fit-reports/:token': 'public',
   'GET /api/settings': ADMIN,
@@ -72,6 +73,9 @@ export const ROUTE_ACCESS = {
   'GET /api/suppliers': BUYERS_OR_WRITE_KEY,
   'POST /api/suppliers': BUYERS,
   'PATCH /api/suppliers/:id': BUYERS,
+  // Everyone who sees a sell price may see the rule that chose it; buyers set it.
+  'GET /api/sell-price-rules': COUNTER,
+  'PUT /api/sell-price-rules/:id': BUYERS,
   'GET /api/price-lists': BUYERS_OR_WRITE_KEY,
   'POST /api/price-lists': BUYERS_OR_WRITE_KEY,
   'GET /api/price-lists/:id': BUYERS_OR_WRITE_KEY,

@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { DEFAULT_SETTINGS, settingsSchema, type Settings } from '../../shared/schemas/settings';
+import { DEFAULT_SETTINGS, settingsSchema, type Settings, type UpdateSettingsBody } from '../../shared/schemas/settings';
 import { audit } from '../repositories/audit.repository';
 import { readStoredSettings, SETTINGS_KEY, writeSettings } from '../repositories/settings.repository';
 
@@ -33,13 +33,15 @@ async function readSettings(ds: DataSource): Promise<Settings> {
       loadPoints: { ...DEFAULT_SETTINGS.compat.loadPoints, ...(stored.compat?.loadPoints ?? {}) },
     },
     priceList: { ...DEFAULT_SETTINGS.priceList, ...(stored.priceList ?? {}) },
+    store: { ...DEFAULT_SETTINGS.store, ...(stored.store ?? {}) },
   };
   const parsed = settingsSchema.safeParse(merged);
   return parsed.success ? parsed.data : DEFAULT_SETTINGS;
 }
 
 /** PUT /api/settings: saved with its audit row, and this server's cached copy dropped. */
-export async function saveSettings(ds: DataSource, actorId: string, settings: Settings): Promise<Settings> {
+export async function saveSettings(ds: DataSource, actorId: string, body: UpdateSettingsBody['settings']): Promise<Settings> {
+  const settings: Settings = { ...body, store: body.store ?? (await readSettings(ds)).store };
   await ds.transaction(async (m) => {
     await writeSettings(m, settings);
     await audit(m, { actorId, action: 'settings.update', entityType: 'setting', entityId: SETTINGS_KEY, data: { settings } });

@@ -39,8 +39,8 @@ function refuseDuplicate(err: unknown): never {
   throw err;
 }
 
-export function listSuppliers(ds: DataSource): Promise<SupplierRow[]> {
-  return listSupplierRows(ds.manager);
+export function listSuppliers(ds: DataSource, includeArchived = false): Promise<SupplierRow[]> {
+  return listSupplierRows(ds.manager, includeArchived);
 }
 
 export async function createSupplier(ds: DataSource, actorId: string, body: CreateSupplierBody): Promise<SupplierRow> {
@@ -62,7 +62,8 @@ export async function updateSupplier(ds: DataSource, actorId: string, id: string
   return ds
     .transaction(async (m) => {
       if (!(await updateSupplierFields(m, id, body))) throw AppError.notFound('Supplier');
-      await audit(m, { actorId, action: 'supplier.update', entityType: 'supplier', entityId: id, data: { fields: Object.keys(body) } });
+      const action = body.archived === true ? 'supplier.archive' : body.archived === false ? 'supplier.restore' : 'supplier.update';
+      await audit(m, { actorId, action, entityType: 'supplier', entityId: id, data: { fields: Object.keys(body) } });
       return one(m, id);
     })
     .catch(refuseDuplicate);

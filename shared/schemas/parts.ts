@@ -4,6 +4,7 @@ import { printedNumberSchema, uuidSchema } from './common';
 import { interchangeCheckSchema } from './compat';
 import { interchangeClaimSchema } from './interchange';
 import { brandNameSchema } from './brands';
+import { sellPriceBasisSchema } from './sell-price';
 import { coilSpecSchema, PART_KINDS, partSpecSchema, plugSpecSchema } from './specs';
 import { text } from './text';
 
@@ -120,8 +121,10 @@ export const partDetailSchema = z
     interchange: z.array(interchangeRowSchema),
     supersession: supersessionSchema,
     stock: stockViewSchema,
-    /** The sell price: the lowest list price among the suppliers. */
+    /** The sell price, chosen by the sell-price rule (see sell-price.ts). */
     price: priceSchema.nullable(),
+    /** Which supplier's price `price` is, and why; null when no supplier prices the part. */
+    sellPriceBasis: sellPriceBasisSchema.nullable(),
     /** One per supplier; cost and margin only for buyers and admins. */
     prices: z.array(priceSchema),
   })

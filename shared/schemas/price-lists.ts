@@ -1,6 +1,8 @@
 import { z } from 'zod';
+import { DELIMITERS } from '../price-list/delimiters';
 import { mappingSchema } from '../price-list/mapping';
 import { limitQuerySchema, offsetQuerySchema, timestampSchema, uuidSchema } from './common';
+import { counterPricesSchema } from './sell-price';
 import { fileText } from './text';
 
 /** Supplier price lists: upload, preview, commit or discard, history (buyers and admins). */
@@ -19,16 +21,21 @@ const mappingFieldSchema = fileText(256 * 1024)
   })
   .pipe(mappingSchema);
 
+export const delimiterSchema = z.enum(DELIMITERS);
+
 /** The text fields of the multipart upload (the file itself is the `file` part). */
 export const uploadPriceListFieldsSchema = z.object({
   supplierId: uuidSchema,
   mapping: mappingFieldSchema.optional(),
   /** Optional id chosen by the client, so it can poll GET /api/price-lists/:id while the upload is processed. */
   uploadId: uuidSchema.optional(),
+  /** The field delimiter; guessed from the first lines when absent. */
+  delimiter: delimiterSchema.optional(),
 });
 export type UploadPriceListFields = z.infer<typeof uploadPriceListFieldsSchema>;
 
-export const previewPriceListBodySchema = z.object({ mapping: mappingSchema.optional() });
+/** A new mapping, or a new delimiter (the file is read again, its mapping guessed or remembered anew). */
+export const previewPriceListBodySchema = z.object({ mapping: mappingSchema.optional(), delimiter: delimiterSchema.optional() });
 export type PreviewPriceListBody = z.infer<typeof previewPriceListBodySchema>;
 
 const offsetSchema = offsetQuerySchema(10_000_000);
@@ -131,7 +138,11 @@ export const priceListHistorySchema = z.object({ priceLists: z.array(priceListSc
 export type PriceListHistory = z.infer<typeof priceListHistorySchema>;
 
 /** POST .../commit: the list as committed, plus what could not follow (search index, e-mail). */
-export const commitPriceListResponseSchema = priceListSchema.extend({ notices: z.array(z.string()) });
+export const commitPriceListResponseSchema = priceListSchema.extend({
+  notices: z.array(z.string()),
+  /** Whether the Counter now sells this list's parts at this supplier's price (see `counterPricesMessage`). */
+  counterPrices: counterPricesSchema,
+});
 export type CommitPriceListResponse = z.infer<typeof commitPriceListResponseSchema>;
 
 export const SUPERSESSION_STATES = ['link', 'already', 'not-found', 'kind-mismatch', 'conflict', 'loop'] as const;
@@ -143,7 +154,10 @@ export const priceListChangeSchema = z
     line: z.number().int(),
     type: z.enum(['new', 'changed', 'unchanged']),
     partId: uuidSchema.nullable(),
+    /** As the supplier printed it. */
     partNumber: z.string(),
+    /** The catalog's number of the part it matched (null for a new part). */
+    catalogNumber: z.string().nullable(),
     brand: z.string(),
     description: z.string().nullable(),
     kind: z.enum(['coil', 'plug']).nullable(),

@@ -30,9 +30,15 @@ export const updateSupplierBodySchema = z
     phone: phoneSchema.nullable().optional(),
     /** The remembered column mapping; null forgets it. */
     mapping: mappingSchema.nullable().optional(),
+    /** Archive (hide from pickers and lists; its price lists stay in the history) or restore. */
+    archived: z.boolean().optional(),
   })
   .refine((b) => Object.keys(b).length > 0, { message: 'nothing to change' });
 export type UpdateSupplierBody = z.infer<typeof updateSupplierBodySchema>;
+
+/** GET /api/suppliers: archived suppliers only when asked for. */
+export const suppliersQuerySchema = z.object({ archived: z.enum(['include', 'exclude']).default('exclude') });
+export type SuppliersQuery = z.infer<typeof suppliersQuerySchema>;
 
 // ---------- responses ----------
 
@@ -48,6 +54,8 @@ export const supplierSchema = z
     lastPriceListAt: timestampSchema.nullable(),
     lastPriceListId: uuidSchema.nullable(),
     createdAt: timestampSchema,
+    /** Archived: hidden from pickers and lists unless asked for. */
+    archivedAt: timestampSchema.nullable(),
   })
   .meta({ id: 'Supplier' });
 export type Supplier = z.infer<typeof supplierSchema>;

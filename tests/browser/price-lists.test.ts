@@ -99,12 +99,25 @@ describe('journey 6: price-list intake', () => {
     await s.page.getByRole('tab', { name: /Supersessions/ }).click();
     await s.page.getByRole('tabpanel').getByRole('row').filter({ hasText: 'QW-IC 3161' }).waitFor();
 
+    // Commit asks first, with the counts; nothing is written until the buyer confirms.
     await s.page.getByRole('button', { name: 'Commit 40 rows' }).click();
+    const confirm = s.page.getByRole('dialog', { name: 'Commit supplier-a-clean.csv?' });
+    const writes = confirm.getByLabel('What the commit writes');
+    await writes.waitFor();
+    expect(await writes.textContent()).toMatch(/New parts\d+Price changes\d+Unchanged\d+Supersessions\d+Rows refused \(not written\)0/);
+    await s.shot('price-lists-commit-confirm');
+    await confirm.getByRole('button', { name: 'Commit 40 rows' }).click();
     await s.page.getByRole('status').filter({ hasText: 'Committed supplier-a-clean.csv' }).waitFor();
+    // The message says whether the Counter sells at this supplier's prices, by the sell-price rule.
+    expect(await s.page.getByRole('status').filter({ hasText: 'Committed supplier-a-clean.csv' }).textContent()).toMatch(
+      /Counter (now sells|'s prices did not change|’s prices did not change)/,
+    );
     await s.shot('price-lists-committed');
     const historyRow = s.page.getByRole('row').filter({ hasText: 'supplier-a-clean.csv' }).filter({ hasText: 'committed' });
     expect(await historyRow.count()).toBe(1);
-    expect(await historyRow.textContent()).toContain(CLEAN_SHA256.slice(0, 12));
+    // The file's hash is the server's business (refusing the same file twice), not a column for the buyer.
+    expect(await historyRow.textContent()).not.toContain(CLEAN_SHA256.slice(0, 12));
+    expect(await s.page.getByRole('columnheader', { name: /SHA/ }).count()).toBe(0);
 
     // The same file again for the same supplier is refused whole, before anything is staged.
     await s.page.getByRole('button', { name: 'Upload another file' }).click();
@@ -150,7 +163,10 @@ describe('journey 6: price-list intake', () => {
     expect(await rejected.getByRole('link', { name: 'Download rejected rows (CSV)' }).getAttribute('href')).toMatch(/\/errors\.csv$/);
     await s.shot('price-lists-rejected-rows');
     await s.page.getByRole('button', { name: 'Discard' }).click();
-    await s.page.getByRole('button', { name: 'Yes, discard' }).click();
+    await s.page
+      .getByRole('dialog', { name: /Discard supplier-a-bad-rows\.csv/ })
+      .getByRole('button', { name: 'Discard the file' })
+      .click();
     await s.page.getByRole('status').filter({ hasText: 'Nothing in the catalog changed' }).waitFor();
 
     // The Counter shows the committed price: NR/IR 2208, cost 7.60, list 16.99 from this supplier.
@@ -170,5 +186,53 @@ describe('journey 6: price-list intake', () => {
     const supplierRow = s.page.getByRole('row').filter({ has: s.page.getByRole('cell', { name: supplierName, exact: true }) });
     await supplierRow.filter({ hasNotText: 'none yet' }).waitFor();
     await s.shot('price-lists-suppliers');
+  });
+
+  it('a pipe-delimited file is read with pipe preselected; another delimiter can be chosen, and Commit asks with the counts', async () => {
+    await signInAs(s, 'buyer@harborlane.test');
+    await s.page.getByRole('heading', { name: 'Counter' }).waitFor();
+    const nav = s.page.getByRole('navigation', { name: 'Main' });
+    const supplierName = `Pipe Supply ${randomUUID().slice(0, 6)}`;
+    await nav.getByRole('link', { name: 'Suppliers' }).click();
+    const form = s.page.getByRole('form', { name: 'Add a supplier' });
+    await form.getByLabel('Name').fill(supplierName);
+    await form.getByRole('button', { name: 'Add supplier' }).click();
+    await s.page.getByRole('cell', { name: supplierName, exact: true }).waitFor();
+    await nav.getByRole('link', { name: 'Price lists' }).click();
+    await s.page.getByLabel('Supplier', { exact: true }).selectOption({ label: supplierName });
+
+    const tag = randomUUID().slice(0, 5).toUpperCase();
+    const lines = [
+      'Part Number|Brand|Description|Cost|List|Core|Pack Qty|GTIN|Supersedes|Kind',
+      `QW-IC P${tag}1|Quaywell|Coil, long boot|21.00|42.00|0.00|1|||coil`,
+      `QW-IC P${tag}2|Quaywell|Coil, short boot|22.00|44.00|0.00|1|||coil`,
+      'QW-SP 1406|Quaywell|Plug|3.30|7.59|0.00|4|||plug',
+    ];
+    await s.page
+      .getByLabel('Price-list file')
+      .setInputFiles({ name: 'pipe.txt', mimeType: 'text/plain', buffer: Buffer.from(lines.join('\n') + '\n') });
+    const delimiter = s.page.getByLabel('Delimiter');
+    await delimiter.waitFor();
+    expect(await delimiter.inputValue()).toBe('|');
+    expect(await countOf(s, 'Rows in file')).toBe('3');
+
+    // The wrong delimiter reads one column: refused, once; choosing pipe again reads the file again.
+    await delimiter.selectOption({ label: 'Comma ( , )' });
+    await s.page.getByRole('alert').first().waitFor();
+    await delimiter.selectOption({ label: 'Pipe ( | )' });
+    await s.page.getByRole('button', { name: 'Commit 3 rows' }).waitFor();
+    await s.shot('price-lists-pipe');
+
+    await s.page.getByRole('button', { name: 'Commit 3 rows' }).click();
+    const confirm = s.page.getByRole('dialog', { name: 'Commit pipe.txt?' });
+    const writes = confirm.getByLabel('What the commit writes');
+    expect(await writes.textContent()).toContain('New parts2');
+    // Cancel writes nothing.
+    await confirm.getByRole('button', { name: 'Cancel' }).click();
+    await confirm.waitFor({ state: 'detached' });
+    expect(await s.page.getByRole('status').filter({ hasText: 'Committed pipe.txt' }).count()).toBe(0);
+    await s.page.getByRole('button', { name: 'Commit 3 rows' }).click();
+    await s.page.getByRole('dialog', { name: 'Commit pipe.txt?' }).getByRole('button', { name: 'Commit 3 rows' }).click();
+    await s.page.getByRole('status').filter({ hasText: 'Committed pipe.txt' }).waitFor();
   });
 });

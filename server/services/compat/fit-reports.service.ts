@@ -3,20 +3,24 @@ import type { DataSource } from 'typeorm';
 import { checkLabel } from '../../../shared/compat';
 import type { User } from '../../../shared/schemas/auth';
 import { CAUTIONS } from '../../../shared/schemas/compat';
-import type { FitReportBody } from '../../../shared/schemas/fit-reports';
+import type { SideLabel } from '../../../shared/schemas/compat';
+import type { FitReportBody, FitReportPrice, FitReportsQuery } from '../../../shared/schemas/fit-reports';
 import { AppError } from '../../errors';
 import type { JobQueue } from '../../jobs/queue';
 import { escapeHtml, type OutgoingMail } from '../../mail/mailer';
 import { presentCoilComparison, presentPlugComparison } from '../../presenters/compat.presenter';
-import { presentFitReport } from '../../presenters/fit-report.presenter';
+import { presentFitReport, type FitReportRecord } from '../../presenters/fit-report.presenter';
+import { sellPriceRow } from '../../presenters/stock-price.presenter';
 import { audit } from '../../repositories/audit.repository';
 import {
   findFitReport,
   findFitReportByToken,
   insertFitReport,
   listFitReports,
+  setFitReportArchived,
   type FitReportRow,
 } from '../../repositories/fit-reports.repository';
+import { pricesOf } from '../../repositories/prices.repository';
 import { findUser } from '../../repositories/users.repository';
 import { getSettings } from '../settings.service';
 import { compareCoilsOn, comparePlugsOn } from './compare.service';
@@ -36,7 +40,7 @@ export class FitReportService {
   ) {}
 
   /** The verdict is recomputed here from the inputs: a client's verdict is never trusted. */
-  async create(user: User, body: FitReportBody): Promise<FitReportRow> {
+  async create(user: User, body: FitReportBody): Promise<FitReportRecord> {
     const { compat: settings } = await getSettings(this.ds);
     const ex = this.ds.manager;
     // The report keeps the result as it was shown that day: later changes to the model or the settings do not rewrite it.
@@ -45,6 +49,7 @@ export class FitReportService {
         ? presentCoilComparison(await compareCoilsOn(ex, body.inputs, settings))
         : presentPlugComparison(await comparePlugsOn(ex, body.inputs, settings));
     const token = randomBytes(24).toString('base64url');
+    const prices = await this.sellPrices(result);
     const title = body.title?.trim() || `${result.substitute.label} for ${result.original.label} on ${result.engine.label.split(' — ')[0]}`;
     const id = await this.ds.transaction(async (m) => {
       const reportId = await insertFitReport(m, {
@@ -56,6 +61,8 @@ export class FitReportService {
         shareToken: token,
         createdBy: user.id,
         shopId: user.shopId,
+        vehicle: body.vehicle ? { ...body.vehicle, engine: body.vehicle.engine ?? result.engine.label } : null,
+        prices,
       });
       await audit(m, {
         actorId: user.id,
@@ -69,21 +76,66 @@ export class FitReportService {
     return this.get(user, id);
   }
 
-  list(user: User): Promise<FitReportRow[]> {
-    return listFitReports(this.ds.manager, user.role === 'technician' ? user.shopId : null, LIST_LIMIT);
+  /** The sell price of each side that is a catalog part with a supplier price, as the rule picks it today. */
+  private async sellPrices(result: { original: SideLabel; substitute: SideLabel }): Promise<FitReportPrice[]> {
+    const sides = (['original', 'substitute'] as const).flatMap((side) => {
+      const { partId, label } = result[side];
+      return partId ? [{ side, partId, label }] : [];
+    });
+    const prices = await pricesOf(
+      this.ds.manager,
+      sides.map((s) => s.partId),
+    );
+    return sides.flatMap((s) => {
+      const row = sellPriceRow(prices.get(s.partId) ?? []);
+      return row ? [{ ...s, listCents: row.listCents, coreCents: row.coreCents }] : [];
+    });
   }
 
-  async get(user: User, id: string): Promise<FitReportRow> {
+  list(user: User, query: FitReportsQuery): Promise<FitReportRow[]> {
+    return listFitReports(this.ds.manager, {
+      shopId: user.role === 'technician' ? user.shopId : null,
+      q: query.q,
+      includeArchived: query.archived === 'include',
+      limit: LIST_LIMIT,
+    });
+  }
+
+  private async record(row: FitReportRow): Promise<FitReportRecord> {
+    return { row, store: (await getSettings(this.ds)).store };
+  }
+
+  private async visible(user: User, id: string): Promise<FitReportRow> {
     const r = await findFitReport(this.ds.manager, id);
     // Another shop's report is "not found", so its existence does not leak.
     if (!r || !visibleTo(user, r)) throw AppError.notFound('Fit report');
     return r;
   }
 
-  async getShared(token: string): Promise<FitReportRow> {
+  async get(user: User, id: string): Promise<FitReportRecord> {
+    return this.record(await this.visible(user, id));
+  }
+
+  async getShared(token: string): Promise<FitReportRecord> {
     const r = await findFitReportByToken(this.ds.manager, token);
     if (!r) throw AppError.notFound('Fit report');
-    return r;
+    return this.record(r);
+  }
+
+  /** Archives (hidden from the list; the share link still opens it) or restores a report. */
+  async setArchived(user: User, id: string, archived: boolean): Promise<FitReportRecord> {
+    await this.visible(user, id);
+    await this.ds.transaction(async (m) => {
+      await setFitReportArchived(m, id, archived);
+      await audit(m, {
+        actorId: user.id,
+        action: archived ? 'fit-report.archive' : 'fit-report.restore',
+        entityType: 'fit_report',
+        entityId: id,
+        data: {},
+      });
+    });
+    return this.get(user, id);
   }
 
   /** Checks the sender may see the report, then queues the e-mail with its audit row. */
@@ -100,7 +152,7 @@ export class FitReportService {
     const row = await findFitReport(this.ds.manager, id);
     const senderUser = await findUser(this.ds.manager, senderId);
     if (!row || !senderUser) throw new Error(`fit report ${id} or its sender ${senderId} is gone`);
-    const report = presentFitReport(row, this.appUrl);
+    const report = presentFitReport(await this.record(row), this.appUrl);
     const sender = senderUser.name;
     const lines = report.result.checks.map((c) => `  ${c.verdict.toUpperCase().padEnd(6)} ${checkLabel(c.id)}: ${c.reason}`).join('\n');
     const htmlRows = report.result.checks

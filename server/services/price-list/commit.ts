@@ -1,6 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { JobQueue } from '../../jobs/queue';
 import type { PriceListApplied, PriceListCounts } from '../../../shared/schemas/price-lists';
+import type { CounterPrices } from '../../../shared/schemas/sell-price';
 import { formatDate } from '../../../shared/format';
 import { AppError } from '../../errors';
 import { audit } from '../../repositories/audit.repository';
@@ -14,6 +15,7 @@ import {
   updateKnownPrices,
 } from '../../repositories/price-list-commit.repository';
 import { deleteFileChunks } from '../../repositories/price-list-files.repository';
+import { counterPricesOfList } from '../../repositories/prices.repository';
 import {
   commitFacts,
   committedListOfFile,
@@ -123,7 +125,14 @@ export async function commitPriceList(
  * POST /api/price-lists/:id/commit: the search index and the buyers' e-mail are queued inside the
  * commit, so nothing after it can fail the request; answers the list as committed.
  */
-export async function commitWithFollowUp(ds: DataSource, jobs: JobQueue, listId: string, actorId: string | null): Promise<PriceListRow> {
-  await commitPriceList(ds, listId, actorId, (m) => enqueueCommitFollowUp(m, jobs, listId));
-  return getPriceList(ds, listId);
+export async function commitWithFollowUp(
+  ds: DataSource,
+  jobs: JobQueue,
+  listId: string,
+  actorId: string | null,
+): Promise<{ list: PriceListRow; counterPrices: CounterPrices }> {
+  const { supplierId } = await commitPriceList(ds, listId, actorId, (m) => enqueueCommitFollowUp(m, jobs, listId));
+  // Read after the commit, by the same rule the Counter reads prices with: what the commit's message says is what the Counter shows.
+  const counterPrices = await counterPricesOfList(ds.manager, listId, supplierId);
+  return { list: await getPriceList(ds, listId), counterPrices };
 }

@@ -1,6 +1,6 @@
-/** Field delimiters suppliers use: comma, semicolon (European spreadsheets), tab (text exports). */
-export const DELIMITERS = [',', ';', '\t'] as const;
-export type Delimiter = (typeof DELIMITERS)[number];
+import { DELIMITERS, type Delimiter } from '../../../shared/price-list/delimiters';
+
+export { DELIMITERS, type Delimiter };
 
 const MAX_RECORDS = 50;
 

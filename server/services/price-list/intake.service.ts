@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import type { DataSource } from 'typeorm';
+import { isDelimiter, type Delimiter } from '../../../shared/price-list/delimiters';
 import { validateMapping, type Mapping } from '../../../shared/price-list/mapping';
 import { formatDate } from '../../../shared/format';
 import { AppError } from '../../errors';
@@ -33,6 +34,7 @@ export interface UploadInput {
   filePath: string;
   sizeBytes: number;
   mapping?: Mapping;
+  delimiter?: Delimiter;
   /** The client's id for the list, so it can poll the progress. */
   id?: string;
   actorId: string | null;
@@ -71,6 +73,7 @@ export async function uploadPriceList(deps: IntakeDeps, input: UploadInput): Pro
     sizeBytes: input.sizeBytes,
     mapping: input.mapping,
     rememberedMapping: remembered ?? undefined,
+    delimiter: input.delimiter,
     maxFileBytes: input.maxFileBytes,
     flagThresholdPct: input.flagThresholdPct,
     create: { fileName: input.fileName, sha256, actorId: input.actorId, filePath: input.filePath },
@@ -128,18 +131,26 @@ async function compareAgain(deps: IntakeDeps, listId: string, list: StagedList, 
  * POST /api/price-lists/:id/preview: a stale list compared again with the current catalog, or,
  * with a new mapping, the kept file read again with it.
  */
-export async function previewPriceList(deps: IntakeDeps, input: { id: string; mapping?: Mapping }): Promise<PriceListRow> {
+export async function previewPriceList(
+  deps: IntakeDeps,
+  input: { id: string; mapping?: Mapping; delimiter?: Delimiter },
+): Promise<PriceListRow> {
   const ds = deps.dataSource;
   const { maxFileBytes, flagThresholdPct } = await intakeSettings(ds);
   const list = await loadStaged(ds, input.id);
-  if (input.mapping && !sameMapping(input.mapping, list.mapping)) {
+  const newDelimiter = input.delimiter !== undefined && input.delimiter !== list.delimiter;
+  if (newDelimiter || (input.mapping && !sameMapping(input.mapping, list.mapping))) {
     if (!(await hasStoredFile(ds, input.id))) throw AppError.conflict('The uploaded file is no longer kept: upload it again.');
+    // Other delimiter, other headers: the old mapping no longer fits, so the supplier's remembered one (or the guess) is used.
+    const remembered = newDelimiter ? await supplierMapping(ds, list.supplier_id) : null;
     await stageList(deps, {
       listId: input.id,
       supplierId: list.supplier_id,
       open: () => readFileChunks(ds, input.id),
       sizeBytes: list.size_bytes,
-      mapping: input.mapping,
+      mapping: newDelimiter ? undefined : input.mapping,
+      rememberedMapping: remembered ?? undefined,
+      delimiter: input.delimiter ?? (isDelimiter(list.delimiter) ? list.delimiter : undefined),
       // A stored file was under the limit when it came; a lower limit since then does not refuse it.
       maxFileBytes: Math.max(maxFileBytes, list.size_bytes),
       flagThresholdPct,

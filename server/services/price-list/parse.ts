@@ -18,6 +18,8 @@ export { PriceListFileError } from './decode';
 export interface ParseOptions {
   /** The buyer's mapping; without one, the mapping is guessed from the headers. */
   mapping?: Mapping;
+  /** The buyer's choice of delimiter; without one, it is guessed from the first lines. */
+  delimiter?: Delimiter;
   /** The supplier's mapping from an earlier file, carried onto these headers when no mapping is given. */
   rememberedMapping?: Mapping;
   maxFieldChars?: number;
@@ -198,6 +200,7 @@ class LineReader {
 export async function openText(
   input: Readable | Buffer,
   maxFileBytes: number,
+  chosen?: Delimiter,
 ): Promise<{ decoder: PriceListDecoder; delimiter: Delimiter; text: Readable }> {
   if (Buffer.isBuffer(input) && input.length > maxFileBytes) {
     throw new PriceListFileError('too-large', `The file is larger than the limit of ${Math.round(maxFileBytes / 1024 / 1024)} MB.`);
@@ -227,7 +230,8 @@ export async function openText(
     if (ended) return;
     for (let next = await decoded.next(); !next.done; next = await decoded.next()) yield next.value;
   }
-  return { decoder, delimiter: detectDelimiter(Buffer.concat(sample).toString('utf8'), ended), text: Readable.from(rest()) };
+  const delimiter = chosen ?? detectDelimiter(Buffer.concat(sample).toString('utf8'), ended);
+  return { decoder, delimiter, text: Readable.from(rest()) };
 }
 
 /**
@@ -404,7 +408,7 @@ export function tooManyRows(maxDataRows: number): PriceListFileError {
 export async function parsePriceList(input: Readable | Buffer, opts: ParseOptions = {}): Promise<PriceListParse> {
   const maxDataRows = opts.maxDataRows ?? PRICE_LIST_LIMITS.maxDataRows;
   const maxRecordChars = opts.maxRecordChars ?? PRICE_LIST_LIMITS.maxRecordChars;
-  const { decoder, delimiter, text } = await openText(input, opts.maxFileBytes ?? PRICE_LIST_LIMITS.maxFileBytes);
+  const { decoder, delimiter, text } = await openText(input, opts.maxFileBytes ?? PRICE_LIST_LIMITS.maxFileBytes, opts.delimiter);
   const parser = parse(csvParseOptions(delimiter, maxRecordChars));
   pipeline(text, parser, () => {});
   const reader = new LineReader(parser, maxRecordChars);

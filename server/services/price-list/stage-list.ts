@@ -9,6 +9,7 @@ import { diffStagedList, fieldHeaders } from './diff';
 import { asAppError } from './file-refusal';
 import { storeFileChunks } from './file-store';
 import { lockListOrRefuse, lockSupplier } from './locks';
+import type { Delimiter } from './delimiter';
 import { parsePriceList, type PriceListParse } from './parse';
 import { ProgressReporter } from './progress';
 import { stageRows } from './stage-rows';
@@ -26,6 +27,8 @@ export interface StageRun {
   sizeBytes: number;
   mapping?: Mapping;
   rememberedMapping?: Mapping;
+  /** The buyer's delimiter; guessed when absent. */
+  delimiter?: Delimiter;
   maxFileBytes: number;
   flagThresholdPct: number;
   /** A first upload: the price_list row is created once the header is read, and the file kept. */
@@ -73,6 +76,7 @@ export async function stageList(deps: IntakeDeps, run: StageRun): Promise<void> 
     parsed = await parsePriceList(run.open(), {
       mapping: run.mapping,
       rememberedMapping: run.rememberedMapping,
+      delimiter: run.delimiter,
       maxFileBytes: run.maxFileBytes,
       onProgress: progress.report,
     });

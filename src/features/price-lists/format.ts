@@ -5,6 +5,3 @@ export function percentChange(oldCents: number | null, newCents: number): number
   if (oldCents === null || oldCents === 0) return null;
   return ((newCents - oldCents) / oldCents) * 100;
 }
-
-/** The first 12 hex digits, enough to tell two files apart by eye. */
-export const shortHash = (sha256: string): string => sha256.slice(0, 12);

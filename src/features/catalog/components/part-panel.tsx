@@ -3,6 +3,7 @@ import { ErrorNote, Panel } from '@/components/ui/panel';
 import { usePart } from '../api/get-part';
 import { InterchangeList } from './interchange-list';
 import { PartVerdict } from './part-verdict';
+import { sellPriceReasonText } from '@shared/schemas/sell-price';
 import { PriceNote } from './price-note';
 import { SpecList } from './spec-list';
 import { StockNote } from './stock-note';
@@ -56,7 +57,7 @@ export function PartPanel({
       </Panel>
     );
   }
-  const { part, spec, interchange, supersession, stock, price, prices } = detail.data;
+  const { part, spec, interchange, supersession, stock, price, prices, sellPriceBasis } = detail.data;
   const superseded = supersession.current.id !== part.id;
   return (
     <Panel title={`${part.kind === 'coil' ? 'Ignition coil' : 'Spark plug'} · ${part.brand}`} actions={close}>
@@ -83,6 +84,11 @@ export function PartPanel({
         <div className="flex flex-wrap items-baseline justify-between gap-2 rounded-md bg-paper-sunk px-3 py-2">
           <PriceNote price={price} large />
           <StockNote stock={stock} />
+          {sellPriceBasis && (
+            <p className="basis-full text-sm text-ink-soft">
+              {sellPriceBasis.supplier}’s price · {sellPriceReasonText(sellPriceBasis)}
+            </p>
+          )}
         </div>
         <Section title="Verdict">
           <PartVerdict part={part} engineId={engineId} onOpenPart={onOpenPart} />

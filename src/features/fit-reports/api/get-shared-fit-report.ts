@@ -1,12 +1,16 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { fitReportResponseSchema, type FitReport } from '@shared/schemas/fit-reports';
+import { sharedFitReportResponseSchema, type SharedFitReport } from '@shared/schemas/fit-reports';
 import { api } from '@/lib/api-client';
 import { fitReportKeys } from './keys';
 
 /** A report opened by its share link: no sign-in, read-only. */
-export const getSharedFitReport = async (token: string): Promise<FitReport> =>
-  (await api('GET', `/api/shared/fit-reports/${encodeURIComponent(token)}`, { schema: fitReportResponseSchema, allowUnauthorized: true }))
-    .fitReport;
+export const getSharedFitReport = async (token: string): Promise<SharedFitReport> =>
+  (
+    await api('GET', `/api/shared/fit-reports/${encodeURIComponent(token)}`, {
+      schema: sharedFitReportResponseSchema,
+      allowUnauthorized: true,
+    })
+  ).fitReport;
 
 export const sharedFitReportQueryOptions = (token: string) =>
   queryOptions({ queryKey: fitReportKeys.shared(token), queryFn: () => getSharedFitReport(token), retry: false });

@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
-import { useNavigate } from 'react-router-dom';
+import { useNavigate, useSearchParams } from 'react-router-dom';
+import { pickedVehicleOf } from '@/features/catalog/compare-link';
 import type { FitReportBody } from '@shared/schemas/fit-reports';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -11,10 +12,16 @@ export function SaveFitReportForm({ request }: { request: FitReportBody }) {
   const [title, setTitle] = useState('');
   const create = useCreateFitReport();
   const navigate = useNavigate();
+  // The vehicle picked at the Counter, when Compare was opened from there.
+  const [params] = useSearchParams();
+  const vehicle = pickedVehicleOf(params);
   const submit = (e: FormEvent) => {
     e.preventDefault();
     const t = title.trim();
-    create.mutate({ ...request, ...(t ? { title: t } : {}) }, { onSuccess: (report) => navigate(`/fit-reports/${report.id}`) });
+    create.mutate(
+      { ...request, ...(t ? { title: t } : {}), ...(vehicle ? { vehicle } : {}) },
+      { onSuccess: (report) => navigate(`/fit-reports/${report.id}`) },
+    );
   };
   return (
     <form aria-label="Save as fit report" onSubmit={submit} className="flex flex-wrap items-end gap-3 print:hidden">

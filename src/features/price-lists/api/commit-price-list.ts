@@ -11,7 +11,7 @@ export function useCommitPriceList() {
   return useMutation({
     mutationFn: commitPriceList,
     onSuccess: (committed, { supplierId }) => {
-      const { notices: _notices, ...list } = committed;
+      const { notices: _notices, counterPrices: _counter, ...list } = committed;
       qc.setQueryData(priceListKeys.detail(list.id), list);
       // Committing makes the supplier's other staged lists stale, so the history changes too.
       void qc.invalidateQueries({ queryKey: priceListKeys.history(supplierId) });

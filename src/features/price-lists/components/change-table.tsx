@@ -67,7 +67,14 @@ const part: Column = {
   header: 'Part',
   cell: (r) => (
     <>
-      <span className="block whitespace-nowrap font-mono text-sm font-semibold">{r.partNumber}</span>
+      <span className="block whitespace-nowrap font-mono text-sm font-semibold" title="As the supplier printed it">
+        {r.partNumber}
+      </span>
+      {r.catalogNumber !== null && (
+        <span className="block whitespace-nowrap text-xs text-ink-soft">
+          catalog <span className="font-mono text-ink">{r.catalogNumber}</span>
+        </span>
+      )}
       <span className="block whitespace-nowrap text-xs text-ink-soft">{r.brand}</span>
     </>
   ),

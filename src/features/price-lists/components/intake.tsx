@@ -1,7 +1,11 @@
 import { useState } from 'react';
 import type { Mapping } from '@shared/price-list/mapping';
 import { priceListFileRefusalDetailsSchema, type PriceList, type PriceListCounts } from '@shared/schemas/price-lists';
+import { DELIMITER_LABELS, DELIMITERS, isDelimiter, type Delimiter } from '@shared/price-list/delimiters';
+import { counterPricesMessage, type CounterPrices } from '@shared/schemas/sell-price';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/dialog';
+import { SelectField } from '@/components/ui/field';
 import { ErrorNote, Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { useCommitPriceList } from '../api/commit-price-list';
@@ -11,7 +15,6 @@ import { useUploadProgress } from '../api/get-upload-progress';
 import { usePreviewPriceList } from '../api/preview-price-list';
 import { newUploadId, useUploadPriceList, type UploadProgress } from '../api/upload-price-list';
 import { formatBytes, formatCount } from '@shared/format';
-import { shortHash } from '../format';
 import { FileDrop } from './file-drop';
 import { MappingTable, mappingProblems } from './mapping-table';
 import { PreviewCounts } from './preview-counts';
@@ -97,7 +100,8 @@ function NewFile({ supplierId, onStaged }: { supplierId: string; onStaged: (id: 
           <UploadBars progress={upload.progress} uploadId={uploadId} />
         </div>
       )}
-      <ErrorNote error={upload.error} />
+      {/* A mapping refusal is shown once, as the mapping table's own problems; any other refusal as a note. */}
+      {!(refusal?.headers && file) && <ErrorNote error={upload.error} />}
       {refusal?.headers && file && (
         <div className="flex max-w-2xl flex-col gap-3 rounded-md border border-ink/10 p-3">
           <p className="text-sm text-ink">Map the columns of {file.name} and upload it again.</p>
@@ -125,10 +129,43 @@ function countsSentence(counts: PriceListCounts): string {
   ].join(', ');
 }
 
+function CommitSummary({ counts, supplierName }: { counts: PriceListCounts; supplierName: string }) {
+  const rows: [string, number][] = [
+    ['New parts', counts.new],
+    ['Price changes', counts.changed],
+    ['Unchanged', counts.unchanged],
+    ['Supersessions', counts.supersessions],
+    ['Rows refused (not written)', counts.rejected],
+  ];
+  return (
+    <div className="flex flex-col gap-2">
+      <p>
+        This writes {supplierName}’s prices into the live catalog in one step. The Counter sells at them only where the sell-price rule
+        picks this supplier.
+      </p>
+      <dl aria-label="What the commit writes" className="grid grid-cols-[1fr_auto] gap-x-6 gap-y-0.5">
+        {rows.map(([label, n]) => (
+          <div key={label} className="contents">
+            <dt>{label}</dt>
+            <dd className="text-right tabular-nums">{formatCount(n)}</dd>
+          </div>
+        ))}
+      </dl>
+    </div>
+  );
+}
+
 /** Steps two to four for a staged list: columns, preview, commit or discard. */
-function StagedList({ list, onClose, onCommitted }: { list: PriceList; onClose: () => void; onCommitted: (notices: string[]) => void }) {
+function StagedList({
+  list,
+  onClose,
+  onCommitted,
+}: {
+  list: PriceList;
+  onClose: () => void;
+  onCommitted: (done: { notices: string[]; counterPrices: CounterPrices }) => void;
+}) {
   const [draft, setDraft] = useState<Mapping>(list.mapping);
-  const [confirmDiscard, setConfirmDiscard] = useState(false);
   const preview = usePreviewPriceList();
   const commit = useCommitPriceList();
   const discard = useDiscardPriceList();
@@ -139,11 +176,31 @@ function StagedList({ list, onClose, onCommitted }: { list: PriceList; onClose: 
   const valid = counts ? counts.total - counts.rejected : 0;
   const busy = preview.isPending || commit.isPending || discard.isPending;
   const blocked = list.stale ? 'stale' : dirty ? 'dirty' : valid === 0 ? 'empty' : null;
+  // The select shows the buyer's last choice even when reading with it failed, so choosing back works.
+  const [delimiter, setDelimiter] = useState<Delimiter>(isDelimiter(list.delimiter) ? list.delimiter : ',');
 
   return (
     <div className="grid gap-4 lg:grid-cols-[minmax(340px,380px)_minmax(0,1fr)] lg:items-start">
       <Panel title="Columns">
         <div className="flex flex-col gap-3">
+          <SelectField
+            label="Delimiter"
+            hint="Guessed from the first lines of the file. Choose another to read the file again."
+            value={delimiter}
+            disabled={busy}
+            onChange={(e) => {
+              const next = e.target.value;
+              if (!isDelimiter(next)) return;
+              setDelimiter(next);
+              preview.mutate({ id: list.id, delimiter: next });
+            }}
+          >
+            {DELIMITERS.map((d) => (
+              <option key={d} value={d}>
+                {DELIMITER_LABELS[d]}
+              </option>
+            ))}
+          </SelectField>
           <p className="text-sm text-ink-soft">
             {MAPPING_SOURCE[list.mappingSource]} The mapping is remembered for this supplier’s next file.
           </p>
@@ -166,44 +223,42 @@ function StagedList({ list, onClose, onCommitted }: { list: PriceList; onClose: 
         title="Preview"
         actions={
           <div className="flex items-center gap-2">
-            {confirmDiscard ? (
-              <>
-                <span className="text-sm text-ink">Discard this file? The catalog stays as it is.</span>
-                <Button variant="danger" disabled={busy} onClick={() => discard.mutate({ id: list.id, supplierId: list.supplierId })}>
-                  Yes, discard
-                </Button>
-                <Button variant="ghost" onClick={() => setConfirmDiscard(false)}>
-                  Keep it
-                </Button>
-              </>
-            ) : (
-              <>
-                <Button variant="danger" disabled={busy} onClick={() => setConfirmDiscard(true)}>
+            <ConfirmDialog
+              title={`Discard ${list.fileName}?`}
+              confirmLabel="Discard the file"
+              tone="danger"
+              trigger={
+                <Button variant="danger" disabled={busy}>
                   Discard
                 </Button>
-                <Button
-                  disabled={busy || blocked !== null}
-                  onClick={() =>
-                    commit.mutate(
-                      { id: list.id, supplierId: list.supplierId },
-                      { onSuccess: (committed) => onCommitted(committed.notices) },
-                    )
-                  }
-                >
-                  {commit.isPending ? 'Committing…' : `Commit ${formatCount(valid)} rows`}
-                </Button>
-              </>
+              }
+              onConfirm={() => discard.mutateAsync({ id: list.id, supplierId: list.supplierId })}
+            >
+              <p>The staged rows and the kept file are removed. The catalog stays as it is; the file stays in the history as discarded.</p>
+            </ConfirmDialog>
+            {counts && (
+              <ConfirmDialog
+                title={`Commit ${list.fileName}?`}
+                confirmLabel={`Commit ${formatCount(valid)} rows`}
+                trigger={
+                  <Button disabled={busy || blocked !== null}>
+                    {commit.isPending ? 'Committing…' : `Commit ${formatCount(valid)} rows`}
+                  </Button>
+                }
+                onConfirm={async () => {
+                  const committed = await commit.mutateAsync({ id: list.id, supplierId: list.supplierId });
+                  onCommitted({ notices: committed.notices, counterPrices: committed.counterPrices });
+                }}
+              >
+                <CommitSummary counts={counts} supplierName={list.supplierName} />
+              </ConfirmDialog>
             )}
           </div>
         }
       >
         <div className="flex flex-col gap-3">
           <p className="text-sm text-ink-soft">
-            <span className="font-medium text-ink">{list.fileName}</span> · {formatBytes(list.sizeBytes)} · SHA-256{' '}
-            <span className="font-mono" title={list.sha256}>
-              {shortHash(list.sha256)}
-            </span>{' '}
-            ·{' '}
+            <span className="font-medium text-ink">{list.fileName}</span> · {formatBytes(list.sizeBytes)} ·{' '}
             <button type="button" className="text-accent underline-offset-2 hover:underline" onClick={onClose}>
               set aside and upload another file
             </button>
@@ -228,7 +283,6 @@ function StagedList({ list, onClose, onCommitted }: { list: PriceList; onClose: 
           )}
           {blocked === 'empty' && <p className="text-sm text-nogo">No row of this file can be committed.</p>}
           {preview.isPending && <ProgressBar label="Reading the file again" value={null} />}
-          <ErrorNote error={commit.error ?? discard.error} />
           {counts && (
             <>
               <PreviewCounts counts={counts} flagged={list.flagged} thresholdPct={list.flagThresholdPct} />
@@ -241,7 +295,13 @@ function StagedList({ list, onClose, onCommitted }: { list: PriceList; onClose: 
   );
 }
 
-function Finished({ list, notices, onClose }: { list: PriceList; notices: string[]; onClose: () => void }) {
+interface CommitDone {
+  notices: string[];
+  counterPrices: CounterPrices | null;
+}
+
+function Finished({ list, done, onClose }: { list: PriceList; done: CommitDone; onClose: () => void }) {
+  const { notices, counterPrices } = done;
   const committed = list.status === 'committed';
   return (
     <Panel>
@@ -257,9 +317,8 @@ function Finished({ list, notices, onClose }: { list: PriceList; notices: string
             <div>
               <p className="text-lg font-semibold text-ink">{committed ? `Committed ${list.fileName}` : `Discarded ${list.fileName}`}</p>
               <p className="text-[15px] text-ink-soft">
-                {committed && list.counts
-                  ? `${countsSentence(list.counts)}. The Counter shows the new prices now.`
-                  : 'Nothing in the catalog changed.'}
+                {committed && list.counts ? `${countsSentence(list.counts)}.` : 'Nothing in the catalog changed.'}
+                {committed && counterPrices && ` ${counterPricesMessage(counterPrices)}`}
               </p>
               {committed && list.applied && (
                 <p className="text-sm text-ink-soft">
@@ -298,9 +357,9 @@ export function PriceListIntake({
   onListChange: (id: string | null) => void;
 }) {
   const list = usePriceList(listId);
-  const [notices, setNotices] = useState<string[]>([]);
+  const [done, setDone] = useState<CommitDone>({ notices: [], counterPrices: null });
   const close = () => {
-    setNotices([]);
+    setDone({ notices: [], counterPrices: null });
     onListChange(null);
   };
 
@@ -341,6 +400,6 @@ export function PriceListIntake({
     );
   }
   if (l.status === 'staged')
-    return <StagedList key={`${l.id}:${JSON.stringify(l.mapping)}`} list={l} onClose={close} onCommitted={setNotices} />;
-  return <Finished list={l} notices={notices} onClose={close} />;
+    return <StagedList key={`${l.id}:${l.delimiter ?? ''}:${JSON.stringify(l.mapping)}`} list={l} onClose={close} onCommitted={setDone} />;
+  return <Finished list={l} done={done} onClose={close} />;
 }

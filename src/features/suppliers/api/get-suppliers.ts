@@ -3,8 +3,11 @@ import { suppliersResponseSchema } from '@shared/schemas/suppliers';
 import { api } from '@/lib/api-client';
 import { supplierKeys } from './keys';
 
-export const getSuppliers = async () => (await api('GET', '/api/suppliers', { schema: suppliersResponseSchema })).suppliers;
+/** Active suppliers (what pickers offer); archived ones too with `includeArchived`. */
+export const getSuppliers = async (includeArchived = false) =>
+  (await api('GET', `/api/suppliers${includeArchived ? '?archived=include' : ''}`, { schema: suppliersResponseSchema })).suppliers;
 
-export const suppliersQueryOptions = () => queryOptions({ queryKey: supplierKeys.all, queryFn: getSuppliers });
+export const suppliersQueryOptions = (includeArchived = false) =>
+  queryOptions({ queryKey: supplierKeys.list(includeArchived), queryFn: () => getSuppliers(includeArchived) });
 
-export const useSuppliers = () => useQuery(suppliersQueryOptions());
+export const useSuppliers = (includeArchived = false) => useQuery(suppliersQueryOptions(includeArchived));

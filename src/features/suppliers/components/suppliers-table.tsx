@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/dialog';
 import { ErrorNote } from '@/components/ui/panel';
 import { useUpdateSupplier } from '../api/update-supplier';
 import type { Supplier } from '@shared/schemas/suppliers';
@@ -89,6 +90,34 @@ function EditRow({ supplier, onDone }: { supplier: Supplier; onDone: () => void 
   );
 }
 
+/** Archive (hidden from pickers and lists; its price lists stay in the history) or restore, after a confirmation. */
+function ArchiveButton({ supplier }: { supplier: Supplier }) {
+  const update = useUpdateSupplier();
+  const archived = supplier.archivedAt !== null;
+  return (
+    <ConfirmDialog
+      title={archived ? `Restore ${supplier.name}?` : `Archive ${supplier.name}?`}
+      confirmLabel={archived ? 'Restore' : 'Archive'}
+      tone={archived ? 'primary' : 'danger'}
+      trigger={
+        <Button variant="ghost" aria-label={`${archived ? 'Restore' : 'Archive'} ${supplier.name}`}>
+          {archived ? 'Restore' : 'Archive'}
+        </Button>
+      }
+      onConfirm={() => update.mutateAsync({ id: supplier.id, archived: !archived })}
+    >
+      {archived ? (
+        <p>{supplier.name} comes back to the supplier pickers and its prices count again for the Counter’s sell price.</p>
+      ) : (
+        <p>
+          {supplier.name} leaves the supplier pickers and lists, and the Counter no longer sells at its prices. Its price lists stay in the
+          history; nothing is deleted, and it can be restored.
+        </p>
+      )}
+    </ConfirmDialog>
+  );
+}
+
 /** The store's suppliers, each row editable in place. */
 export function SuppliersTable({ suppliers }: { suppliers: Supplier[] }) {
   const [editing, setEditing] = useState<string | null>(null);
@@ -111,15 +140,21 @@ export function SuppliersTable({ suppliers }: { suppliers: Supplier[] }) {
             <EditRow key={s.id} supplier={s} onDone={() => setEditing(null)} />
           ) : (
             <tr key={s.id} className="border-b border-ink/5">
-              <td className="py-2 pr-3 font-medium">{s.name}</td>
+              <td className="py-2 pr-3 font-medium">
+                {s.name}
+                {s.archivedAt && <span className="ml-2 text-sm font-normal text-ink-soft">archived {formatDate(s.archivedAt)}</span>}
+              </td>
               <td className="whitespace-nowrap py-2 pr-3 font-mono text-sm text-ink-soft">{s.key}</td>
               <td className="py-2 pr-3 text-ink-soft">{s.contactEmail ?? '—'}</td>
               <td className="py-2 pr-3 text-ink-soft">{s.phone ?? '—'}</td>
               <td className="whitespace-nowrap py-2 pr-3 text-ink-soft">{lastList(s.lastPriceListAt)}</td>
-              <td className="py-2 text-right">
-                <Button variant="secondary" aria-label={`Edit ${s.name}`} onClick={() => setEditing(s.id)}>
-                  Edit
-                </Button>
+              <td className="whitespace-nowrap py-2 text-right">
+                {s.archivedAt === null && (
+                  <Button variant="secondary" aria-label={`Edit ${s.name}`} onClick={() => setEditing(s.id)}>
+                    Edit
+                  </Button>
+                )}{' '}
+                <ArchiveButton supplier={s} />
               </td>
             </tr>
           ),
