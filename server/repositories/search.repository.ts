@@ -149,3 +149,18 @@ export function exactNumberRows(ex: Executor, norm: string, limit: number): Prom
     [norm, limit],
   );
 }
+
+const printedRowSchema = z.object({ source: z.enum(['part', 'interchange']), norm: z.string(), printed: z.string() });
+export type PrintedNumberRow = z.infer<typeof printedRowSchema>;
+
+/** How our parts and the interchange rows print these folded numbers (one spelling each). */
+export function printedNumbers(ex: Executor, norms: readonly string[]): Promise<PrintedNumberRow[]> {
+  return queryRows(
+    ex,
+    printedRowSchema,
+    `SELECT 'part' AS source, part_number_norm AS norm, min(part_number) AS printed FROM part WHERE part_number_norm = ANY($1::text[]) GROUP BY 2
+     UNION ALL
+     SELECT 'interchange', foreign_number_norm, min(foreign_number) FROM interchange WHERE foreign_number_norm = ANY($1::text[]) GROUP BY 2`,
+    [norms],
+  );
+}
