@@ -20,6 +20,7 @@ export async function exactNumberHits(ex: Executor, norm: string, limit: number)
     matchedNumber: r.matched_number,
     inStock: r.on_hand > 0,
     onHand: r.on_hand,
+    bin: r.bin,
     hasSpec: r.has_spec,
   }));
 }

@@ -60,6 +60,8 @@ export const searchHitSchema = z
     inStock: z.boolean(),
     /** The store's count: absent for technicians, who see in stock yes/no only. */
     onHand: z.number().int().optional(),
+    /** The shelf the part is in: absent for technicians, as the count. */
+    bin: z.string().optional(),
     hasSpec: z.boolean(),
     /** For a hit found through interchange: the verdict of the foreign part's spec against ours. */
     check: interchangeCheckSchema.nullable().optional(),
