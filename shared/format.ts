@@ -135,8 +135,12 @@ export function formatMoney(cents: number, opts: FormatMoneyOptions = {}): strin
 const dateParts = new Intl.DateTimeFormat('en-US', { day: 'numeric', month: 'short', year: 'numeric' });
 const timeParts = new Intl.DateTimeFormat('en-US', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
 
+// A calendar day ("2026-12-04", a price's effective date) is that day wherever the reader is;
+// Date would read it as UTC midnight, the evening before west of Greenwich.
+const DAY_ONLY = /^\d{4}-\d{2}-\d{2}$/;
+
 const toDate = (when: Date | string): Date | null => {
-  const d = typeof when === 'string' ? new Date(when) : when;
+  const d = typeof when === 'string' ? new Date(DAY_ONLY.test(when) ? `${when}T00:00:00` : when) : when;
   return Number.isNaN(d.getTime()) ? null : d;
 };
 

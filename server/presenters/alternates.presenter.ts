@@ -3,15 +3,16 @@ import type { Role } from '../../shared/roles';
 import type { AlternatesResponse } from '../../shared/schemas/alternates';
 import type { PartRow } from '../repositories/parts.repository';
 import type { PriceRow } from '../repositories/prices.repository';
+import type { StockLevel } from '../repositories/stock.repository';
 import { presentCheck } from './compat.presenter';
 import { presentPart } from './part.presenter';
-import { sellPrice } from './stock-price.presenter';
+import { presentStock, sellPrice } from './stock-price.presenter';
 
 export interface AlternatesRecord {
   /** The engine's fitted part of the kind asked for; null when none is on file. */
   original: PartRow | null;
   /** Ranked best first (compat-model.md §7). */
-  alternates: { row: PartRow; verdict: Verdict; deviation: number; checks: Check[]; inStock: boolean; prices: PriceRow[] }[];
+  alternates: { row: PartRow; verdict: Verdict; deviation: number; checks: Check[]; stock: StockLevel; prices: PriceRow[] }[];
 }
 
 /** GET /api/engines/:id/alternates: the ranking, with the sell price as the role may see it. */
@@ -23,7 +24,7 @@ export function presentAlternates(r: AlternatesRecord, role: Role): AlternatesRe
       verdict: a.verdict,
       deviation: a.deviation,
       checks: a.checks.map(presentCheck),
-      inStock: a.inStock,
+      stock: presentStock(a.stock.onHand, a.stock.bin, role),
       price: sellPrice(a.prices, role),
     })),
   };

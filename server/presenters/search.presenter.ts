@@ -14,12 +14,13 @@ export function presentSearchHit(doc: PartDocument, q: string): SearchHit {
     ...matchReason(doc, q),
     inStock: doc.inStock,
     onHand: doc.onHand,
+    bin: doc.bin,
     hasSpec: doc.hasSpec,
   };
 }
 
-/** GET /api/search: a shop's technician sees in stock yes/no, not the store's count. */
+/** GET /api/search: a shop's technician sees in stock yes/no, not the store's count or bin. */
 export function presentSearchResults(result: SearchResponse, role: Role): SearchResponse {
   if (role !== 'technician') return result;
-  return { ...result, hits: result.hits.map(({ onHand: _onHand, ...hit }) => hit) };
+  return { ...result, hits: result.hits.map(({ onHand: _onHand, bin: _bin, ...hit }) => hit) };
 }

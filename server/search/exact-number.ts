@@ -31,6 +31,7 @@ export async function exactNumberHits(
     matchedNumber: r.matched_number,
     inStock: r.on_hand > 0,
     onHand: r.on_hand,
+    bin: r.bin,
     hasSpec: r.has_spec,
   }));
   return { hits, originals };

@@ -25,6 +25,7 @@ export interface PartDocument {
   current: boolean;
   hasSpec: boolean;
   onHand: number;
+  bin: string;
   inStock: boolean;
   /** For ranking among equal matches: 2 for a spec, 1 for stock on hand. */
   rankBoost: number;
@@ -128,6 +129,7 @@ function toDocument(r: DocumentRow): PartDocument {
     current: r.current,
     hasSpec: r.has_spec,
     onHand: r.on_hand,
+    bin: r.bin,
     inStock: r.on_hand > 0,
     rankBoost: (r.has_spec ? 2 : 0) + (r.on_hand > 0 ? 1 : 0),
     architecture: r.architecture,

@@ -8,6 +8,7 @@ import { readOnly } from '../db/read-only';
 import { presentInterchangeCheck } from '../presenters/part.presenter';
 import { presentSearchHit } from '../presenters/search.presenter';
 import { claimOriginals } from '../repositories/interchange.repository';
+import { printedNumbers } from '../repositories/search.repository';
 import { claimKey, exactNumberHits, type ClaimOriginals } from '../search/exact-number';
 import { buildFilters } from '../search/filters';
 import { FACET_ATTRIBUTES } from '../search/part-document';
@@ -60,6 +61,24 @@ async function withInterchangeChecks(
   });
 }
 
+/**
+ * A close (typo) match names the number it found as that number is printed, not folded: the clerk
+ * typed something else, so the folded form would be the only spelling on screen.
+ */
+async function withPrintedNumbers(ds: DataSource, hits: SearchHit[], typedNorm: string): Promise<SearchHit[]> {
+  const close = hits.filter((h) => h.matchedNumber !== null && h.matchedNumber !== typedNorm && h.matchedBy !== 'gtin');
+  if (!close.length) return hits;
+  const rows = await readOnly(ds, (ex) => printedNumbers(ex, [...new Set(close.map((h) => h.matchedNumber ?? ''))]));
+  const printed = new Map(rows.map((r) => [`${r.source}|${r.norm}`, r.printed]));
+  return hits.map((h) => {
+    if (!close.includes(h)) return h;
+    // Our own and superseded numbers are parts; an interchange number is a foreign row's.
+    const source = h.matchedBy === 'interchange' ? 'interchange' : 'part';
+    const found = h.matchedBy === 'number' ? h.partNumber : printed.get(`${source}|${h.matchedNumber}`);
+    return found ? { ...h, matchedPrinted: found } : h;
+  });
+}
+
 /** How a kind is said at the counter: "pencil coil", "iridium spark plug". */
 const KIND_WORDS: Record<PartKind, RegExp> = { coil: /\bcoils?\b/gi, plug: /\b(?:spark\s+)?plugs?\b/gi };
 
@@ -109,13 +128,13 @@ export async function searchParts(index: PartSearchIndex, query: SearchQuery, ds
     if (res.hits.length > 0) break;
     res = await index.search(q, { ...base, matchingStrategy });
   }
+  const hits = await withPrintedNumbers(
+    ds,
+    res.hits.map((d) => presentSearchHit(d, raw)),
+    normalizePartNumber(raw),
+  );
   return {
-    hits: await withInterchangeChecks(
-      ds,
-      res.hits.map((d) => presentSearchHit(d, raw)),
-      compat,
-      query.engineId,
-    ),
+    hits: await withInterchangeChecks(ds, hits, compat, query.engineId),
     total: res.estimatedTotalHits ?? res.hits.length,
     facets: res.facetDistribution ?? {},
   };

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { checkSchema, verdictSchema } from './compat';
-import { partSummarySchema, priceSchema } from './parts';
+import { partSummarySchema, priceSchema, stockViewSchema } from './parts';
 import { PART_KINDS } from './specs';
 
 /** GET /api/engines/:id/alternates: our parts ranked against the engine's fitted coil or plug. */
@@ -19,7 +19,8 @@ export const alternateSchema = z
     /** How far from the original, for ranking within a verdict (lower is closer). */
     deviation: z.number(),
     checks: z.array(checkSchema),
-    inStock: z.boolean(),
+    /** On hand and bin for the store's staff, in stock yes/no for a technician (as a part's detail). */
+    stock: stockViewSchema,
     price: priceSchema.nullable(),
   })
   .meta({ id: 'Alternate' });

@@ -50,10 +50,18 @@ export const searchHitSchema = z
     kind: z.enum(PART_KINDS),
     description: z.string(),
     matchedBy: z.enum(MATCHED_BY),
+    /** The number that matched, folded (SPF52135): what the index holds. */
     matchedNumber: z.string().nullable(),
+    /**
+     * The same number as its part or interchange row prints it (SPF 52.135), for a close (typo)
+     * match, where the clerk's typing is not the number found. Null for exact and word matches.
+     */
+    matchedPrinted: z.string().nullable().optional(),
     inStock: z.boolean(),
     /** The store's count: absent for technicians, who see in stock yes/no only. */
     onHand: z.number().int().optional(),
+    /** The shelf the part is in: absent for technicians, as the count. */
+    bin: z.string().optional(),
     hasSpec: z.boolean(),
     /** For a hit found through interchange: the verdict of the foreign part's spec against ours. */
     check: interchangeCheckSchema.nullable().optional(),

@@ -56,6 +56,9 @@ describe('journeys 1 and 2: the Counter', () => {
       const altPanel = page.getByRole('region', { name: `Part ${altNumber}` });
       await altPanel.getByText(/in place of QW-IC 3101 on VK18/).waitFor();
       await s.shot('counter-vehicle-alternate');
+      // The part opens in a sheet over the page; Escape closes it and gives the page back.
+      await page.keyboard.press('Escape');
+      await altPanel.waitFor({ state: 'detached' });
       const before = await ranked.getByRole('listitem').count();
       await coil.getByLabel('show no-go too').check();
       await coil.getByText('no-go', { exact: true }).first().waitFor();
@@ -101,14 +104,20 @@ describe('journeys 1 and 2: the Counter', () => {
     await page.keyboard.press('ArrowDown');
     await expect(rows.nth(2).getAttribute('aria-selected')).resolves.toBe('true');
     await expect(rows.nth(1).getAttribute('aria-selected')).resolves.toBe('false');
-    await page.keyboard.press('Enter');
+    // Read before opening: the modal sheet hides the page from the accessibility tree while open.
     const opened = (await rows.nth(2).getByRole('gridcell').first().textContent())!.trim();
+    await page.keyboard.press('Enter');
     const panel = page.getByRole('region', { name: `Part ${opened}` });
     await panel.waitFor();
     const interchange = panel.getByRole('list', { name: 'Interchange numbers' });
     await interchange.getByText('SPF 52.135').waitFor();
     expect(await interchange.textContent()).toContain('(typed)');
     await s.shot('counter-interchange');
+    // Escape closes the part sheet, and / brings the keyboard back to the search box.
+    await page.keyboard.press('Escape');
+    await panel.waitFor({ state: 'detached' });
+    await page.keyboard.press('/');
+    await expect(box.evaluate((el) => el === document.activeElement)).resolves.toBe(true);
 
     await box.fill('qw ic 3138');
     const current = resultRow(s, 'QW-IC 3140');

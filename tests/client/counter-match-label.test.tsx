@@ -14,6 +14,13 @@ describe('how a hit matched', () => {
       'via interchange SPF52135 (close match)',
     );
     expect(matchLabel({ matchedBy: 'number', matchedNumber: 'QWSP1406' }, 'QW-SP 1406')).toBe('number');
+    // With the printed spelling from the server, a typo shows the number as the part prints it, not folded.
+    expect(matchLabel({ matchedBy: 'interchange', matchedNumber: 'SPF52135', matchedPrinted: 'SPF 52.135' }, 'SPF 52.153')).toBe(
+      'via interchange SPF 52.135 (close match)',
+    );
+    expect(matchLabel({ matchedBy: 'supersession', matchedNumber: 'QWIC3138', matchedPrinted: 'QW-IC 3138' }, 'qwic 3183')).toBe(
+      'replaces QW-IC 3138 (close match)',
+    );
     expect(matchLabel({ matchedBy: 'number', matchedNumber: 'QWSP1406' }, 'QW-SP 1046')).toBe('number (close match)');
   });
 

@@ -261,7 +261,7 @@ describe('Counter page', () => {
       verdict,
       deviation: 0,
       checks: [{ id: 'connector', verdict, original: 'A', substitute: 'C', unit: '', reason: `Connector ${verdict}.` }],
-      inStock: true,
+      stock: { onHand: 5, bin: 'C-02-1', inStock: true },
       price: price(5299),
     });
     const calls = stubApi({
@@ -286,6 +286,8 @@ describe('Counter page', () => {
     expect(within(items[0]!).getByText('go')).toBeTruthy();
     expect(within(items[1]!).getByText('review')).toBeTruthy();
     expect(within(items[1]!).getByText('Connector review.')).toBeTruthy();
+    // Stock reads as it does for the fitted part (shared/format.ts formatStock), not "in stock: yes".
+    expect(items[0]!.textContent).toContain('5 on hand · bin C-02-1');
     expect(within(items[0]!).getByRole('link', { name: 'Compare' }).getAttribute('href')).toBe(
       `/compare?original=${C1}&substitute=${A1}&engine=${ENGINE_ID}`,
     );

@@ -22,7 +22,7 @@ const HITS = [hit('QW-SP 1406'), hit('QW-SP 1407'), hit('QW-SP 1435', { inStock:
 function renderTable(props: Partial<Parameters<typeof ResultsTable>[0]> = {}) {
   const onOpen = vi.fn();
   const onLeaveTop = vi.fn();
-  render(<ResultsTable hits={HITS} query="qw sp" showOnHand openPartId={null} onOpen={onOpen} onLeaveTop={onLeaveTop} {...props} />);
+  render(<ResultsTable hits={HITS} query="qw sp" openPartId={null} onOpen={onOpen} onLeaveTop={onLeaveTop} {...props} />);
   const rows = within(screen.getByRole('grid', { name: 'Search results' }))
     .getAllByRole('row')
     .slice(1);
@@ -76,12 +76,13 @@ describe('results table keyboard', () => {
     expect(onOpen).not.toHaveBeenCalled();
   });
 
-  it('shows on-hand counts to the store, only yes/no to a technician', () => {
+  it('shows stock as the rest of the app does: on hand to the store, in stock or not to a technician', () => {
     const store = renderTable();
-    expect(store.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['yes · 7', 'yes · 7', 'no']);
+    expect(store.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['7 on hand', '7 on hand', '0 on hand']);
     cleanup();
-    const tech = renderTable({ showOnHand: false });
-    expect(tech.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['yes', 'yes', 'no']);
+    // The server leaves the count out for a technician (search.presenter.ts).
+    const tech = renderTable({ hits: HITS.map(({ onHand: _onHand, ...h }) => h) });
+    expect(tech.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['in stock', 'in stock', 'not in stock']);
   });
 
   it('marks an interchange claim with its verdict word and the check that decided it', () => {
@@ -99,6 +100,6 @@ describe('results table keyboard', () => {
   it('leaves the Matched column out when only spec filters found the parts', () => {
     renderTable({ query: '' });
     expect(screen.queryByRole('columnheader', { name: 'Matched' })).toBeNull();
-    expect(screen.getByRole('columnheader', { name: 'In stock' })).toBeTruthy();
+    expect(screen.getByRole('columnheader', { name: 'Stock' })).toBeTruthy();
   });
 });

@@ -18,6 +18,12 @@ describe('dates: one format for the whole app', () => {
     expect(formatDateTime(iso)).toBe('4 Dec 2026, 15:04');
     expect(formatDate('not a date')).toBe('not a date');
   });
+
+  it("prints a calendar day (a price's effective date) as that day in any time zone", () => {
+    // Run under TZ=America/Los_Angeles too: read as UTC midnight it would be the 3rd there.
+    expect(formatDate('2026-12-04')).toBe('4 Dec 2026');
+    expect(formatDate('2026-01-01')).toBe('1 Jan 2026');
+  });
 });
 
 describe('counts, moves and stock', () => {

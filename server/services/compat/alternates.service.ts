@@ -11,7 +11,7 @@ import { findEngine, fittedPartId } from '../../repositories/engines.repository'
 import { currentSpecPartIds, findPartRows } from '../../repositories/parts.repository';
 import { pricesOf } from '../../repositories/prices.repository';
 import { findSpecs } from '../../repositories/specs.repository';
-import { stockOf } from '../../repositories/stock.repository';
+import { NO_STOCK, stockOf } from '../../repositories/stock.repository';
 import { getSettings } from '../settings.service';
 import { asBadRequest } from './compare.service';
 
@@ -83,7 +83,7 @@ async function rankFor(
       verdict: c.result.verdict,
       deviation: c.result.deviation,
       checks: explain(c.id),
-      inStock: c.inStock,
+      stock: stock.get(c.id) ?? NO_STOCK,
       prices: c.partPrices,
     })),
   };

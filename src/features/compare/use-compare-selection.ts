@@ -2,8 +2,8 @@ import { useCallback, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import type { CoilCompareBody, CoilRef, PlugCompareBody, PlugRef } from '@shared/schemas/compat';
 import { PART_KINDS, type PartKind } from '@shared/schemas/specs';
-import { useEngine } from './api/get-engine';
-import { usePart } from './api/get-part';
+import { usePart } from '@/features/parts/api/get-part';
+import { useEngine } from '@/features/vehicles/api/get-engine';
 import type { TypedSpec } from './components/spec-form';
 
 export type CompareRequest = { kind: 'coil'; body: CoilCompareBody } | { kind: 'plug'; body: PlugCompareBody };

@@ -1,51 +1,67 @@
+import { yesNo } from '@shared/format';
 import { COIL_ARCHITECTURES, COIL_DRIVERS, PLUG_SEATS, type PartKind } from '@shared/schemas/specs';
+import { specField } from '@shared/spec-fields';
 import type { FacetField } from './api/search-parts';
 
 /**
  * The spec filters of each kind. `facet` controls list the values the catalog holds, with how
  * many parts have each; `number` controls take a figure (a gap, a measured resistance) because
- * the server matches those against a window or has no facet for them.
+ * the server matches those against a window or has no facet for them. Labels, units, hints and
+ * value words come from the one spec-field table (shared/spec-fields.ts).
  */
 export interface FilterControl {
   field: FacetField;
   label: string;
+  unit?: string | undefined;
   control: 'facet' | 'number';
   /** Values that always exist, shown even when no part of the current answer has them. */
   fixed?: readonly string[];
   /** How a value reads in the list; the raw value is what the server gets. */
   display?: (value: string) => string;
   step?: string;
-  hint?: string;
+  hint?: string | undefined;
 }
 
+type Extra = Omit<FilterControl, 'field' | 'label' | 'unit' | 'control'>;
+
+/** A filter on a spec field, named as the spec-field table names it (a window's end by its quantity). */
+function specFilter(field: FacetField, specName: string, control: FilterControl['control'], extra: Extra = {}): FilterControl {
+  const def = specField(specName);
+  const words = def?.words;
+  return {
+    field,
+    label: def?.quantity ?? def?.label ?? specName,
+    unit: def?.unit,
+    control,
+    ...(words ? { display: (v: string) => words[v] ?? v } : {}),
+    ...(def?.input === 'checkbox' ? { fixed: ['true', 'false'], display: (v: string) => yesNo(v === 'true') } : {}),
+    ...extra,
+  };
+}
+
+// Brand is the part's, not a spec field.
 const BRAND: FilterControl = { field: 'brand', label: 'Brand', control: 'facet' };
 
-const DRIVER_WORDS: Record<string, string> = { integrated: 'integrated igniter', external: 'external driver' };
-const yesNo = (v: string): string => (v === 'true' ? 'yes' : v === 'false' ? 'no' : v);
-
 export const PLUG_FILTERS: FilterControl[] = [
-  { field: 'threadMm', label: 'Thread (mm)', control: 'facet' },
-  { field: 'reachMm', label: 'Reach (mm)', control: 'facet' },
-  { field: 'seat', label: 'Seat', control: 'facet', fixed: PLUG_SEATS },
-  { field: 'hexMm', label: 'Hex (mm)', control: 'facet' },
-  { field: 'heatStep', label: 'Heat step', control: 'facet', hint: '1 is the hottest, 15 the coldest' },
-  { field: 'resistor', label: 'Resistor', control: 'facet', fixed: ['true', 'false'], display: yesNo },
-  { field: 'gapMm', label: 'Gap (mm)', control: 'number', step: '0.05' },
+  specFilter('threadMm', 'threadMm', 'facet'),
+  specFilter('reachMm', 'reachMm', 'facet'),
+  specFilter('seat', 'seat', 'facet', { fixed: PLUG_SEATS }),
+  specFilter('hexMm', 'hexMm', 'facet'),
+  specFilter('heatStep', 'heatStep', 'facet', { hint: specField('heatStep')?.hint }),
+  specFilter('resistor', 'resistor', 'facet'),
+  specFilter('gapMm', 'gapMm', 'number', { step: '0.05' }),
   BRAND,
 ];
 
 export const COIL_FILTERS: FilterControl[] = [
-  { field: 'architecture', label: 'Architecture', control: 'facet', fixed: COIL_ARCHITECTURES },
-  { field: 'driver', label: 'Driver', control: 'facet', fixed: COIL_DRIVERS, display: (v) => DRIVER_WORDS[v] ?? v },
-  { field: 'connectorPins', label: 'Connector pins', control: 'number', step: '1' },
-  { field: 'connectorKey', label: 'Connector key', control: 'facet' },
-  {
-    field: 'primaryOhm',
-    label: 'Primary (Ω)',
-    control: 'number',
+  specFilter('architecture', 'architecture', 'facet', { fixed: COIL_ARCHITECTURES }),
+  specFilter('driver', 'driver', 'facet', { fixed: COIL_DRIVERS }),
+  specFilter('connectorPins', 'connectorPins', 'number', { step: '1' }),
+  specFilter('connectorKey', 'connectorKey', 'facet'),
+  specFilter('primaryOhm', 'primaryOhmMin', 'number', {
     step: '0.01',
     hint: 'a measured value; finds the coils whose window holds it',
-  },
+  }),
   BRAND,
 ];
 

@@ -105,6 +105,24 @@ describe('GET /api/search', () => {
     expect(r.hits.every((h) => /canister/i.test(h.description))).toBe(true);
   });
 
+  it('gives the store its count and bin in every hit, the exact lookup and the index alike (seed/data/stock.ts)', async () => {
+    const exact = await search({ q: 'QW-IC 3101' });
+    expect(exact.hits[0]).toMatchObject({ partNumber: 'QW-IC 3101', onHand: 14, bin: 'A-01-1', inStock: true });
+    const typo = await search({ q: 'QW-IC 3011' });
+    expect(typo.hits.find((h) => h.partNumber === 'QW-IC 3101')).toMatchObject({ onHand: 14, bin: 'A-01-1' });
+  });
+
+  it('gives a technician in stock yes/no only: no count, no bin', async () => {
+    const tech = await makeUser(t.deps.dataSource, 'technician');
+    const agent = (await signIn(t.app, tech.email, TEST_PASSWORD)).agent;
+    const res = await agent.get('/api/search').query({ q: 'QW-IC 3101' });
+    expect(res.status).toBe(200);
+    const hit = (res.body as SearchResponse).hits[0]!;
+    expect(hit.inStock).toBe(true);
+    expect(hit).not.toHaveProperty('onHand');
+    expect(hit).not.toHaveProperty('bin');
+  });
+
   it('refuses a bad facet value with a 400 naming the field', async () => {
     const res = await clerk.get('/api/search').query({ seat: 'round' });
     expect(res.status).toBe(400);

@@ -41,6 +41,7 @@ describe('GET /api/search with a typo in the number', () => {
     ).toMatchObject({
       matchedBy: 'number',
       matchedNumber: 'QWCN7001',
+      matchedPrinted: 'QW-CN 7001',
     });
     if (eightOrFewer) expect(numbers).not.toContain('QW-CN 7002');
   });
@@ -48,7 +49,12 @@ describe('GET /api/search with a typo in the number', () => {
   it("finds ours through another brand's number typed with two neighbours swapped", async () => {
     // SPF 61.120 is interchanged with QW-IC 3120 (seed/data/interchange.ts).
     const r = await search('SPF 61.210');
-    expect(r.hits.find((h) => h.partNumber === 'QW-IC 3120')).toMatchObject({ matchedBy: 'interchange', matchedNumber: 'SPF61120' });
+    // The number found is also named as the interchange row prints it, for the clerk to read back.
+    expect(r.hits.find((h) => h.partNumber === 'QW-IC 3120')).toMatchObject({
+      matchedBy: 'interchange',
+      matchedNumber: 'SPF61120',
+      matchedPrinted: 'SPF 61.120',
+    });
   });
 
   it('ranks the part a typo away below the one typed exactly', async () => {

@@ -56,7 +56,7 @@ describe('bench test', () => {
     if (verdict === 'open') expect(result.primaryAt20Ohm).toBeNull();
   });
 
-  it('calls a reading at the meter\'s overload open, not out of spec', () => {
+  it("calls a reading at the meter's overload open, not out of spec", () => {
     // A common 4000-count handheld multimeter's top resistance range is 40 MΩ and it shows "OL"
     // (overload) above it: no continuity (common practice, from memory).
     expect(OPEN_CIRCUIT_OHM).toBe(40e6);

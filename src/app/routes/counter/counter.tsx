@@ -3,9 +3,6 @@ import type { PartKind } from '@shared/schemas/specs';
 import { useUser } from '@/app/use-user';
 import { Button } from '@/components/ui/button';
 import { ErrorNote, PageHeader, Panel } from '@/components/ui/panel';
-import { EngineFitments } from '@/features/catalog/components/engine-fitments';
-import { PartPanel } from '@/features/catalog/components/part-panel';
-import { NO_VEHICLE, VehiclePicker, vehicleName, type VehicleChoice } from '@/features/catalog/components/vehicle-picker';
 import { isEmptySearch, useSearchParts, type PartSearch, type SpecFilters as Filters } from '@/features/counter/api/search-parts';
 import { KindChoice } from '@/features/counter/components/kind-choice';
 import { ResultsTable, type ResultsTableHandle } from '@/features/counter/components/results-table';
@@ -13,6 +10,11 @@ import { SearchBox } from '@/features/counter/components/search-box';
 import { SpecFilters } from '@/features/counter/components/spec-filters';
 import { orderHits } from '@/features/counter/order-hits';
 import { useDebouncedValue } from '@/features/counter/use-debounced-value';
+import { useSlashToSearch } from '@/features/counter/use-slash-to-search';
+import { PartSheet } from '@/features/parts/components/part-sheet';
+import { EngineFitments } from '@/features/vehicles/components/engine-fitments';
+import { PartVerdict } from '@/features/vehicles/components/part-verdict';
+import { NO_VEHICLE, VehiclePicker, vehicleName, type VehicleChoice } from '@/features/vehicles/components/vehicle-picker';
 
 const RESULT_LIMIT = 50;
 const TYPING_PAUSE_MS = 150;
@@ -28,7 +30,7 @@ function ResultsSummary({ shown, total, fetching }: { shown: number; total: numb
 
 /**
  * The search workspace: one box for any number, words or a barcode; a vehicle picker; spec
- * filters; the results; and the chosen part beside them.
+ * filters; the results. The chosen part opens in a sheet over them, in view on a phone too.
  */
 export function CounterPage() {
   const user = useUser();
@@ -42,6 +44,7 @@ export function CounterPage() {
   const [openIfSingle, setOpenIfSingle] = useState<string | null>(null);
   const table = useRef<ResultsTableHandle>(null);
   const searchInput = useRef<HTMLInputElement>(null);
+  useSlashToSearch(searchInput);
 
   const engineId = vehicle.engine?.id ?? null;
   const search = useMemo<PartSearch>(
@@ -78,92 +81,82 @@ export function CounterPage() {
       <PageHeader title="Counter">
         <p className="text-sm text-ink-soft">Good to see you, {firstName}.</p>
       </PageHeader>
-      <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_28rem]">
-        <div className="flex min-w-0 flex-col gap-4">
-          <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-            <Panel title="Find a part">
-              <div className="flex flex-col gap-3">
-                <SearchBox
-                  inputRef={searchInput}
-                  value={text}
-                  onChange={setText}
-                  onSubmit={() => {
-                    flushText();
-                    setOpenIfSingle(text);
-                  }}
-                  onArrowDown={() => table.current?.focusSelected()}
-                  busy={results.isFetching}
-                />
-                <KindChoice value={kind} onChange={chooseKind} />
-                {kind ? (
-                  <SpecFilters kind={kind} filters={filters} facets={facets.data?.facets} onChange={setFilters} />
-                ) : (
-                  <p className="text-sm text-ink-faint">Choose coils or plugs to search by spec.</p>
-                )}
-              </div>
-            </Panel>
-            <Panel
-              title="By vehicle"
-              actions={
-                vehicle.year !== null && (
-                  <Button variant="ghost" className="!py-0.5" onClick={() => setVehicle(NO_VEHICLE)}>
-                    Clear
-                  </Button>
-                )
-              }
-            >
-              <VehiclePicker value={vehicle} onChange={setVehicle} />
-            </Panel>
-          </div>
-
-          {searching && (
-            <Panel
-              title="Results"
-              actions={results.data && <ResultsSummary shown={hits.length} total={results.data.total} fetching={results.isFetching} />}
-            >
-              <ErrorNote error={results.error} />
-              {results.isPending && <p className="text-ink-faint">Searching…</p>}
-              {results.data && hits.length === 0 && <p className="text-ink-soft">Nothing matches. Try fewer words or fewer filters.</p>}
-              {hits.length > 0 && (
-                <ResultsTable
-                  ref={table}
-                  hits={hits}
-                  query={search.q}
-                  showOnHand={user.role !== 'technician'}
-                  openPartId={openPartId}
-                  onOpen={setOpenPartId}
-                  onLeaveTop={() => searchInput.current?.focus()}
-                />
+      <div className="flex min-w-0 flex-col gap-4">
+        <div className="grid grid-cols-1 items-start gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+          <Panel title="Find a part">
+            <div className="flex flex-col gap-3">
+              <SearchBox
+                inputRef={searchInput}
+                value={text}
+                onChange={setText}
+                onSubmit={() => {
+                  flushText();
+                  setOpenIfSingle(text);
+                }}
+                onArrowDown={() => table.current?.focusSelected()}
+                busy={results.isFetching}
+              />
+              <KindChoice value={kind} onChange={chooseKind} />
+              {kind ? (
+                <SpecFilters kind={kind} filters={filters} facets={facets.data?.facets} onChange={setFilters} />
+              ) : (
+                <p className="text-sm text-ink-faint">Choose coils or plugs to search by spec.</p>
               )}
-            </Panel>
-          )}
-
-          {vehicle.engine && (
-            <Panel title={`Fits ${vehicleName(vehicle)} · ${vehicle.engine.code}`}>
-              <EngineFitments engineId={vehicle.engine.id} openPartId={openPartId} onOpenPart={setOpenPartId} />
-            </Panel>
-          )}
+            </div>
+          </Panel>
+          <Panel
+            title="By vehicle"
+            actions={
+              vehicle.year !== null && (
+                <Button variant="ghost" className="!py-0.5" onClick={() => setVehicle(NO_VEHICLE)}>
+                  Clear
+                </Button>
+              )
+            }
+          >
+            <VehiclePicker value={vehicle} onChange={setVehicle} />
+          </Panel>
         </div>
 
-        <aside aria-label="Part" className="xl:sticky xl:top-4 xl:max-h-[calc(100vh-2rem)] xl:overflow-y-auto">
-          {openPartId ? (
-            <PartPanel
-              partId={openPartId}
-              engineId={vehicle.engine?.id ?? null}
-              typed={settledText}
-              onOpenPart={setOpenPartId}
-              onClose={() => setOpenPartId(null)}
-            />
-          ) : (
-            <Panel title="Part">
-              <p className="text-ink-soft">
-                Open a part from the results or the vehicle to see its spec, interchange, supersession, stock and price. In the results, ↑ ↓
-                move and Enter opens.
-              </p>
-            </Panel>
-          )}
-        </aside>
+        {searching && (
+          <Panel
+            title="Results"
+            actions={results.data && <ResultsSummary shown={hits.length} total={results.data.total} fetching={results.isFetching} />}
+          >
+            <ErrorNote error={results.error} />
+            {results.isPending && <p className="text-ink-faint">Searching…</p>}
+            {results.data && hits.length === 0 && <p className="text-ink-soft">Nothing matches. Try fewer words or fewer filters.</p>}
+            {hits.length > 0 && (
+              <ResultsTable
+                ref={table}
+                hits={hits}
+                query={search.q}
+                openPartId={openPartId}
+                onOpen={setOpenPartId}
+                onLeaveTop={() => searchInput.current?.focus()}
+              />
+            )}
+            {hits.length > 0 && (
+              <p className="mt-2 hidden text-sm text-ink-faint sm:block">↑ ↓ move, Enter opens the part, / goes back to the search box.</p>
+            )}
+          </Panel>
+        )}
+
+        {vehicle.engine && (
+          <Panel title={`Fits ${vehicleName(vehicle)} · ${vehicle.engine.code}`}>
+            <EngineFitments engineId={vehicle.engine.id} openPartId={openPartId} onOpenPart={setOpenPartId} />
+          </Panel>
+        )}
       </div>
+
+      <PartSheet
+        partId={openPartId}
+        engineId={engineId}
+        typed={settledText}
+        verdict={(part) => <PartVerdict part={part} engineId={engineId} onOpenPart={setOpenPartId} />}
+        onOpenPart={setOpenPartId}
+        onClose={() => setOpenPartId(null)}
+      />
     </>
   );
 }

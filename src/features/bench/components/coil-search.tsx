@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { SearchHit } from '@shared/schemas/search';
-import { PartSearchBox, useDebounced } from '@/components/compat/part-search-box';
+import { PartSearchBox, useDebounced } from '@/features/parts/components/part-search-box';
 import { useSearchCoils } from '../api/search-coils';
 
 export function CoilSearch({ onPick }: { onPick: (hit: SearchHit) => void }) {

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { SearchHit } from '@shared/schemas/search';
 import type { PartKind } from '@shared/schemas/specs';
-import { PartSearchBox, useDebounced } from '@/components/compat/part-search-box';
+import { PartSearchBox, useDebounced } from '@/features/parts/components/part-search-box';
 import { MIN_SEARCH_CHARS, useSearchParts } from '../api/search-parts';
 
 /**

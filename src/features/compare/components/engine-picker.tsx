@@ -3,11 +3,11 @@ import { formatMeasure } from '@shared/format';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { Panel } from '@/components/ui/panel';
-import { useEngine } from '../api/get-engine';
-import { useVehicleEngines } from '../api/get-vehicle-engines';
-import { useVehicleMakes } from '../api/get-vehicle-makes';
-import { useVehicleModels } from '../api/get-vehicle-models';
-import { useVehicleYears } from '../api/get-vehicle-years';
+import { useEngine } from '@/features/vehicles/api/get-engine';
+import { useVehicleEngines } from '@/features/vehicles/api/get-vehicle-engines';
+import { useVehicleMakes } from '@/features/vehicles/api/get-vehicle-makes';
+import { useVehicleModels } from '@/features/vehicles/api/get-vehicle-models';
+import { useVehicleYears } from '@/features/vehicles/api/get-vehicle-years';
 
 /** Year → make → model → engine, each list fetched as the one before it is chosen. */
 function VehiclePicker({ onPick }: { onPick: (engineId: string) => void }) {

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { PartKind } from '@shared/schemas/specs';
 import type { SearchHit } from '@shared/schemas/search';
-import { PartSearchBox, useDebounced } from '@/components/compat/part-search-box';
+import { PartSearchBox, useDebounced } from '@/features/parts/components/part-search-box';
 import { useSearchParts } from '../api/search-parts';
 
 /** The catalog's parts of one kind, by any brand's number or words. */

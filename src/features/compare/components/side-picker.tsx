@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { CoilSpec, PartKind, ResolvedPlugSpec } from '@shared/schemas/specs';
 import { Button } from '@/components/ui/button';
 import { Panel } from '@/components/ui/panel';
-import { usePart } from '../api/get-part';
+import { usePart } from '@/features/parts/api/get-part';
 import { PartSearch } from './part-search';
 import { SpecForm, type TypedSpec } from './spec-form';
 import { SpecSummary } from './spec-summary';

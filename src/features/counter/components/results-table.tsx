@@ -4,16 +4,16 @@ import type { SearchHit } from '@shared/schemas/search';
 import { checkLabel } from '@/features/compat/components/check-labels';
 import { VerdictBadge } from '@/features/compat/components/verdict-badge';
 import { DataTable, type DataTableHandle } from '@/components/ui/data-table';
+import { StockNote } from '@/features/parts/components/stock-note';
 import { matchLabel } from '../match-label';
+import { useMediaQuery } from '../use-media-query';
 
 export type ResultsTableHandle = DataTableHandle;
 
 const column = createColumnHelper<SearchHit>();
 
-function stockText(hit: SearchHit, showOnHand: boolean): string {
-  if (!hit.inStock) return 'no';
-  return showOnHand ? `yes · ${hit.onHand}` : 'yes';
-}
+// Tailwind's `sm`: below it the screen is a phone's.
+const WIDE = '(min-width: 640px)';
 
 /**
  * How the hit matched and, for an interchange claim, its verdict with the checks that decided
@@ -42,7 +42,6 @@ function MatchedCell({ hit, query }: { hit: SearchHit; query: string }) {
 export function ResultsTable({
   hits,
   query,
-  showOnHand,
   openPartId,
   onOpen,
   onLeaveTop,
@@ -50,8 +49,6 @@ export function ResultsTable({
 }: {
   hits: SearchHit[];
   query: string;
-  /** Technicians see in stock yes/no only, never the store's count. */
-  showOnHand: boolean;
   openPartId: string | null;
   onOpen: (partId: string) => void;
   onLeaveTop?: () => void;
@@ -59,6 +56,21 @@ export function ResultsTable({
 }) {
   const columns = useMemo(
     () => [
+      // On a phone one column carries the part (number, brand, description), so the table fits.
+      column.display({
+        id: 'part',
+        header: 'Part',
+        cell: (c) => (
+          <>
+            <span className="font-mono font-semibold whitespace-nowrap">{c.row.original.partNumber}</span>{' '}
+            <span className="text-ink-soft">{c.row.original.brand}</span>
+            <span className="block text-sm">
+              {c.row.original.description}
+              {!c.row.original.hasSpec && <span className="ml-2 text-review">(no spec)</span>}
+            </span>
+          </>
+        ),
+      }),
       column.accessor('partNumber', {
         header: 'Part number',
         cell: (c) => <span className="font-mono font-semibold whitespace-nowrap">{c.getValue()}</span>,
@@ -80,13 +92,14 @@ export function ResultsTable({
         cell: (c) => <MatchedCell hit={c.row.original} query={query} />,
       }),
       column.display({
-        id: 'inStock',
-        header: 'In stock',
-        cell: (c) => <span className="whitespace-nowrap">{stockText(c.row.original, showOnHand)}</span>,
+        id: 'stock',
+        header: 'Stock',
+        cell: (c) => <StockNote stock={c.row.original} />,
       }),
     ],
-    [query, showOnHand],
+    [query],
   );
+  const wide = useMediaQuery(WIDE);
 
   return (
     <DataTable
@@ -96,7 +109,14 @@ export function ResultsTable({
       columns={columns}
       getRowId={(h) => h.partId}
       // With no words typed every hit is a spec match: the column would only repeat itself.
-      columnVisibility={{ matched: query.trim() !== '' }}
+      columnVisibility={{
+        matched: query.trim() !== '',
+        part: !wide,
+        partNumber: wide,
+        brand: wide,
+        kind: wide,
+        description: wide,
+      }}
       onRowOpen={(h) => onOpen(h.partId)}
       openRowId={openPartId}
       {...(onLeaveTop ? { onLeaveTop } : {})}

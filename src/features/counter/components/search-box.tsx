@@ -3,7 +3,7 @@ import { TextField } from '@/components/ui/field';
 
 /**
  * The Counter's one search box. Enter searches at once (a barcode scanner types the GTIN and
- * Enter), ↓ moves into the results, Escape clears.
+ * Enter), ↓ moves into the results, Escape clears; "/" anywhere on the page comes back here.
  */
 export function SearchBox({
   value,
@@ -44,11 +44,14 @@ export function SearchBox({
         value={value}
         onChange={(e) => onChange(e.target.value)}
         onKeyDown={onKeyDown}
-        placeholder="SPF 52.135 · QW-IC 3140 · scan"
+        placeholder="Press / to search · SPF 52.135 · scan"
+        aria-keyshortcuts="/"
         aria-busy={busy || undefined}
         className="!py-2.5 font-mono !text-xl"
       />
-      <p className="text-sm text-ink-soft">Any brand&apos;s number, any spacing. Enter searches at once; ↓ goes to the results.</p>
+      <p className="text-sm text-ink-soft">
+        Any brand&apos;s number, any spacing. Enter searches at once; ↓ goes to the results; / comes back here.
+      </p>
     </div>
   );
 }

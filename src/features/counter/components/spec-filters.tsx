@@ -20,7 +20,7 @@ function FacetSelect({
   // A chosen value stays in the list even when the catalog's counts no longer name it.
   if (value && !values.includes(value)) values.unshift(value);
   return (
-    <SelectField label={control.label} value={value} onChange={(e) => onChange(e.target.value)}>
+    <SelectField label={control.label} unit={control.unit} value={value} onChange={(e) => onChange(e.target.value)}>
       <option value="">any</option>
       {values.map((v) => (
         <option key={v} value={v}>
@@ -68,6 +68,7 @@ export function SpecFilters({
             <TextField
               key={c.field}
               label={c.label}
+              unit={c.unit}
               type="number"
               inputMode="decimal"
               min="0"

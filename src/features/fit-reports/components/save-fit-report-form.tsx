@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { useNavigate, useSearchParams } from 'react-router-dom';
-import { pickedVehicleOf } from '@/features/catalog/compare-link';
+import { pickedVehicleOf } from '@/features/parts/compare-link';
 import type { FitReportBody } from '@shared/schemas/fit-reports';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';

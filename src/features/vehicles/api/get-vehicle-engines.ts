@@ -1,7 +1,7 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
 import { vehicleEnginesResponseSchema, type VehicleEngine } from '@shared/schemas/vehicles';
 import { api } from '@/lib/api-client';
-import { catalogKeys } from './keys';
+import { vehicleKeys } from './keys';
 
 export const getVehicleEngines = async (year: number, make: string, model: string): Promise<VehicleEngine[]> =>
   (
@@ -12,7 +12,7 @@ export const getVehicleEngines = async (year: number, make: string, model: strin
 
 export const vehicleEnginesQueryOptions = (year: number | null, make: string | null, model: string | null) =>
   queryOptions({
-    queryKey: catalogKeys.engines(year ?? 0, make ?? '', model ?? ''),
+    queryKey: vehicleKeys.engines(year ?? 0, make ?? '', model ?? ''),
     queryFn: year === null || make === null || model === null ? skipToken : () => getVehicleEngines(year, make, model),
     staleTime: Infinity,
   });

@@ -2,7 +2,7 @@ import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
 import { alternatesResponseSchema, type Alternate } from '@shared/schemas/alternates';
 import type { PartKind } from '@shared/schemas/specs';
 import { api, ApiError } from '@/lib/api-client';
-import { catalogKeys } from './keys';
+import { vehicleKeys } from './keys';
 
 /** `available: false` while the server has no alternates route (or no ranking for this engine). */
 export type AlternatesResult = { available: true; alternates: Alternate[] } | { available: false };
@@ -22,7 +22,7 @@ export async function getAlternates(engineId: string, kind: PartKind, includeNoG
 
 export const alternatesQueryOptions = (engineId: string | null, kind: PartKind, includeNoGo: boolean) =>
   queryOptions({
-    queryKey: catalogKeys.alternates(engineId ?? '', kind, includeNoGo),
+    queryKey: vehicleKeys.alternates(engineId ?? '', kind, includeNoGo),
     queryFn: engineId === null ? skipToken : () => getAlternates(engineId, kind, includeNoGo),
   });
 

@@ -3,8 +3,8 @@ import { useEngine } from '../api/get-engine';
 import type { Fitment } from '@shared/schemas/vehicles';
 import { AlternatesList } from './alternates-list';
 import { EngineSummary } from './engine-summary';
-import { PriceNote } from './price-note';
-import { StockNote } from './stock-note';
+import { PriceNote } from '@/features/parts/components/price-note';
+import { StockNote } from '@/features/parts/components/stock-note';
 
 function FittedPart({
   fitment,

@@ -1,7 +1,7 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
 import { vehicleModelsResponseSchema } from '@shared/schemas/vehicles';
 import { api } from '@/lib/api-client';
-import { catalogKeys } from './keys';
+import { vehicleKeys } from './keys';
 
 export const getVehicleModels = async (year: number, make: string): Promise<string[]> =>
   (await api('GET', `/api/vehicles/models?${new URLSearchParams({ year: String(year), make })}`, { schema: vehicleModelsResponseSchema }))
@@ -9,7 +9,7 @@ export const getVehicleModels = async (year: number, make: string): Promise<stri
 
 export const vehicleModelsQueryOptions = (year: number | null, make: string | null) =>
   queryOptions({
-    queryKey: catalogKeys.models(year ?? 0, make ?? ''),
+    queryKey: vehicleKeys.models(year ?? 0, make ?? ''),
     queryFn: year === null || make === null ? skipToken : () => getVehicleModels(year, make),
     staleTime: Infinity,
   });

@@ -4,7 +4,7 @@ import { ErrorNote } from '@/components/ui/panel';
 import { useAlternates } from '../api/get-alternates';
 import { useEngine } from '../api/get-engine';
 import type { Fitment } from '@shared/schemas/vehicles';
-import { compareHref } from '../compare-link';
+import { compareHref } from '@/features/parts/compare-link';
 import { AlternatesList } from './alternates-list';
 import { CheckRows } from './check-rows';
 import { VerdictBadge } from '@/features/compat/components/verdict-badge';

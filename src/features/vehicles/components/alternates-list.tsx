@@ -4,9 +4,9 @@ import type { PartKind } from '@shared/schemas/specs';
 import { ErrorNote } from '@/components/ui/panel';
 import { useAlternates } from '../api/get-alternates';
 import type { Alternate } from '@shared/schemas/alternates';
-import { compareHref } from '../compare-link';
-import { yesNo } from '@shared/format';
-import { PriceNote } from './price-note';
+import { compareHref } from '@/features/parts/compare-link';
+import { PriceNote } from '@/features/parts/components/price-note';
+import { StockNote } from '@/features/parts/components/stock-note';
 import { VerdictBadge } from '@/features/compat/components/verdict-badge';
 
 /** The checks that decided a verdict other than go, worst first: what the clerk must know. */
@@ -66,9 +66,10 @@ export function AlternatesList({
       {result?.available && result.alternates.length > 0 && (
         <ol className="flex flex-col divide-y divide-ink/10 rounded-md border border-ink/10" aria-label={`${kind} alternates`}>
           {result.alternates.map((alt) => (
-            <li key={alt.part.id} className="grid grid-cols-[auto_minmax(0,1fr)_auto] items-start gap-x-3 gap-y-1 px-3 py-2">
-              <VerdictBadge verdict={alt.verdict} />
-              <div className="min-w-0">
+            // Stacked, not in columns: on a phone the reasons keep the full width and read as sentences.
+            <li key={alt.part.id} className="flex flex-col gap-1 px-3 py-2">
+              <div className="flex flex-wrap items-baseline gap-x-2 gap-y-1">
+                <VerdictBadge verdict={alt.verdict} />
                 <button
                   type="button"
                   onClick={() => onOpenPart(alt.part.id)}
@@ -76,26 +77,26 @@ export function AlternatesList({
                 >
                   {alt.part.partNumber}
                 </button>
-                <span className="ml-2 text-ink-soft">{alt.part.brand}</span>
-                <p className="truncate text-sm text-ink-soft" title={alt.part.description}>
-                  {alt.part.description}
+                <span className="text-ink-soft">{alt.part.brand}</span>
+                <span className="ml-auto flex flex-wrap items-baseline gap-x-3 text-sm">
+                  <PriceNote price={alt.price} />
+                  <StockNote stock={alt.stock} />
+                  <Link
+                    className="font-medium text-accent-strong underline underline-offset-2"
+                    to={compareHref(fittedPartId, alt.part.id, engineId)}
+                  >
+                    Compare
+                  </Link>
+                </span>
+              </div>
+              <p className="truncate text-sm text-ink-soft" title={alt.part.description}>
+                {alt.part.description}
+              </p>
+              {deciding(alt).map((reason) => (
+                <p key={reason} className="text-sm text-ink">
+                  {reason}
                 </p>
-                {deciding(alt).map((reason) => (
-                  <p key={reason} className="text-sm text-ink">
-                    {reason}
-                  </p>
-                ))}
-              </div>
-              <div className="flex flex-col items-end gap-0.5 text-sm">
-                <PriceNote price={alt.price} />
-                <span>in stock: {yesNo(alt.inStock)}</span>
-                <Link
-                  className="font-medium text-accent-strong underline underline-offset-2"
-                  to={compareHref(fittedPartId, alt.part.id, engineId)}
-                >
-                  Compare
-                </Link>
-              </div>
+              ))}
             </li>
           ))}
         </ol>
