@@ -4,6 +4,7 @@ import { PriceLists1764600200000 } from './1764600200000-PriceLists';
 import { FitReports1764600300000 } from './1764600300000-FitReports';
 import { RateLimits1764600500000 } from './1764600500000-RateLimits';
 import { ApiKeys1764600510000 } from './1764600510000-ApiKeys';
+import { Locations1764600700000 } from './1764600700000-Locations';
 
 // Listed explicitly: globs find nothing under tsx and vitest.
 export const MIGRATIONS = [
@@ -13,4 +14,5 @@ export const MIGRATIONS = [
   FitReports1764600300000,
   RateLimits1764600500000,
   ApiKeys1764600510000,
+  Locations1764600700000,
 ];

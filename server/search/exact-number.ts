@@ -19,7 +19,6 @@ export async function exactNumberHits(ex: Executor, norm: string, limit: number)
     matchedBy: r.matched_by,
     matchedNumber: r.matched_number,
     inStock: r.on_hand > 0,
-    onHand: r.on_hand,
     hasSpec: r.has_spec,
   }));
 }

@@ -1,11 +1,12 @@
 import { z } from 'zod';
 import { checkSchema, verdictSchema } from './compat';
 import { partSummarySchema, priceSchema } from './parts';
+import { locationQuerySchema } from './locations';
 import { PART_KINDS } from './specs';
 
 /** GET /api/engines/:id/alternates: our parts ranked against the engine's fitted coil or plug. */
 
-export const alternatesQuerySchema = z.object({
+export const alternatesQuerySchema = locationQuerySchema.extend({
   kind: z.enum(PART_KINDS),
   /** Include the no-go candidates too. */
   all: z.enum(['1', 'true', '0', 'false']).optional(),
@@ -19,6 +20,7 @@ export const alternateSchema = z
     /** How far from the original, for ranking within a verdict (lower is closer). */
     deviation: z.number(),
     checks: z.array(checkSchema),
+    /** On the shelf at the reader's store ("here"), which the ranking prefers among equals. */
     inStock: z.boolean(),
     price: priceSchema.nullable(),
   })

@@ -12,12 +12,16 @@ const hit = (partNumber: string, over: Partial<SearchHit> = {}): SearchHit => ({
   matchedBy: 'number',
   matchedNumber: partNumber.replace(/\W/g, ''),
   inStock: true,
-  onHand: 7,
+  stock: { inStock: true, here: { locationId: '00000000-0000-4000-8000-0000000000a1', onHand: 7, bin: 'B-01-1' }, elsewhere: [] },
   hasSpec: true,
   ...over,
 });
 
-const HITS = [hit('QW-SP 1406'), hit('QW-SP 1407'), hit('QW-SP 1435', { inStock: false, onHand: 0 })];
+const HITS = [
+  hit('QW-SP 1406'),
+  hit('QW-SP 1407'),
+  hit('QW-SP 1435', { inStock: false, stock: { inStock: false, here: null, elsewhere: [] } }),
+];
 
 function renderTable(props: Partial<Parameters<typeof ResultsTable>[0]> = {}) {
   const onOpen = vi.fn();
@@ -78,7 +82,7 @@ describe('results table keyboard', () => {
 
   it('shows on-hand counts to the store, only yes/no to a technician', () => {
     const store = renderTable();
-    expect(store.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['yes · 7', 'yes · 7', 'no']);
+    expect(store.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['7 here', '7 here', '0 here']);
     cleanup();
     const tech = renderTable({ showOnHand: false });
     expect(tech.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['yes', 'yes', 'no']);

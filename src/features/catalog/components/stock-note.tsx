@@ -1,18 +1,24 @@
 import type { StockView } from '@shared/schemas/parts';
-import { yesNo } from '@shared/format';
+import { formatCount, formatElsewhere, yesNo } from '@shared/format';
 
-/** On hand and bin for the store's staff; in stock yes/no for a shop's technician. */
+/**
+ * This store's on hand and bin first, then what the other stores hold, for the store's staff; in
+ * stock yes/no for a shop's technician.
+ */
 export function StockNote({ stock }: { stock: StockView }) {
-  if (!('onHand' in stock)) return <span>in stock: {yesNo(stock.inStock)}</span>;
+  if (!('here' in stock)) return <span>in stock: {yesNo(stock.inStock)}</span>;
+  const onHand = stock.here?.onHand ?? 0;
+  const elsewhere = formatElsewhere(stock.elsewhere);
   return (
     <span className="whitespace-nowrap">
-      <strong className={stock.onHand > 0 ? 'font-semibold' : 'font-semibold text-nogo'}>{stock.onHand}</strong> on hand
-      {stock.bin && (
+      <strong className={onHand > 0 ? 'font-semibold' : 'font-semibold text-nogo'}>{formatCount(onHand)}</strong> here
+      {stock.here?.bin && (
         <>
           {' · bin '}
-          <span className="font-mono">{stock.bin}</span>
+          <span className="font-mono">{stock.here.bin}</span>
         </>
       )}
+      {elsewhere && <span className="text-ink-soft">{` · ${elsewhere}`}</span>}
     </span>
   );
 }

@@ -1,5 +1,6 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo, type Ref } from 'react';
+import { formatChainStock } from '@shared/format';
 import type { SearchHit } from '@shared/schemas/search';
 import { checkLabel } from '@/components/compat/check-labels';
 import { VerdictBadge } from '@/components/compat/verdict-badge';
@@ -10,9 +11,10 @@ export type ResultsTableHandle = DataTableHandle;
 
 const column = createColumnHelper<SearchHit>();
 
+/** This store's count first, then the other stores' ("0 here · 3 at Eastgate"); yes/no for a technician. */
 function stockText(hit: SearchHit, showOnHand: boolean): string {
-  if (!hit.inStock) return 'no';
-  return showOnHand ? `yes · ${hit.onHand}` : 'yes';
+  if (showOnHand && hit.stock) return formatChainStock(hit.stock);
+  return hit.inStock ? 'yes' : 'no';
 }
 
 /**
