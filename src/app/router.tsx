@@ -8,6 +8,7 @@ import { ComparePage } from './routes/compare/compare';
 import { FitReportPage } from './routes/fit-reports/fit-report';
 import { FitReportsPage } from './routes/fit-reports/fit-reports';
 import { JobsPage } from './routes/jobs/jobs';
+import { TransfersPage } from './routes/transfers/transfers';
 import { SettingsPage } from './routes/settings/settings';
 import { SharedFitReportPage } from './routes/shared/shared-fit-report';
 import { SignInPage } from './routes/auth/sign-in';
@@ -39,6 +40,7 @@ export const router = createBrowserRouter([
       { path: 'team', element: <TeamPage /> },
       { path: 'outbox', element: <OutboxPage /> },
       { path: 'jobs', element: <JobsPage /> },
+      { path: 'transfers', element: <TransfersPage /> },
       { path: 'api-keys', element: <ApiKeysPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
