@@ -120,8 +120,10 @@ export async function seedCatalog(m: EntityManager): Promise<CatalogCounts> {
       [i.foreignBrand, i.foreignNumber, normalizePartNumber(i.foreignNumber), partId(i.ourPartNumber), i.source, i.confidence],
     );
   }
+  const locationIds = await idsBy(`SELECT id, name AS key FROM location`);
   for (const s of stock) {
-    await m.query(`INSERT INTO stock (part_id, on_hand, bin) VALUES ($1,$2,$3) ON CONFLICT DO NOTHING`, [
+    await m.query(`INSERT INTO stock (location_id, part_id, on_hand, bin) VALUES ($1,$2,$3,$4) ON CONFLICT DO NOTHING`, [
+      locationIds.get(s.location),
       partId(s.partNumber),
       s.onHand,
       s.bin,

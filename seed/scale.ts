@@ -4,6 +4,7 @@ import { pipeline } from 'node:stream/promises';
 import pg from 'pg';
 import { from as copyFrom } from 'pg-copy-streams';
 import { normalizePartNumber } from '../shared/part-number';
+import { locations } from './data/locations';
 
 /**
  * The benchmark data set: 100,000 invented parts with specs and stock, and 300,000 interchange
@@ -106,10 +107,18 @@ export async function seedScale(
         return `${ids[i]}\t${thread}\t${thread === 10 ? 1 : 1.25}\t${reach}\tflat\t${hex}\t${4 + (j % 6)}\t${(0.7 + (j % 5) * 0.1).toFixed(1)}\tt\tt\tt\t${['copper', 'platinum', 'iridium'][j % 3]}\n`;
       }),
     );
+    // The stock is the chain's first store's (the demo's first store where there is no store yet).
+    const first = locations[0]!;
+    await client.query(
+      `INSERT INTO location (name, address, phone, opening_hours) SELECT $1, $2, $3, $4 WHERE NOT EXISTS (SELECT 1 FROM location)`,
+      [first.name, first.address, first.phone, first.openingHours],
+    );
+    const store = await client.query(`SELECT id FROM location ORDER BY created_at, name LIMIT 1`);
+    const storeId = (store.rows[0] as { id: string }).id;
     await copy(
       client,
-      `COPY stock (part_id, on_hand, bin) FROM STDIN`,
-      rows(partCount, (i) => `${ids[i]}\t${i % 4 ? (i * 7) % 23 : 0}\tS-${i % 40}-${i % 7}\n`),
+      `COPY stock (location_id, part_id, on_hand, bin) FROM STDIN`,
+      rows(partCount, (i) => `${storeId}\t${ids[i]}\t${i % 4 ? (i * 7) % 23 : 0}\tS-${i % 40}-${i % 7}\n`),
     );
     await copy(
       client,

@@ -21,6 +21,7 @@ import { catalogRoutes } from './routes/catalog.routes';
 import { compatRoutes } from './routes/compat.routes';
 import { fitReportRoutes } from './routes/fit-reports.routes';
 import { jobsRoutes } from './routes/jobs.routes';
+import { locationsRoutes } from './routes/locations.routes';
 import { metricsRoutes, probeRoutes } from './routes/ops.routes';
 import { settingsRoutes } from './routes/settings.routes';
 import { priceListRoutes } from './routes/price-lists.routes';
@@ -39,6 +40,7 @@ export function buildApiRouter(deps: AppDeps, csrf: ReturnType<typeof csrfProtec
   api.use(supplierRoutes(deps));
   api.use(priceListRoutes(deps));
   api.use(jobsRoutes(deps));
+  api.use(locationsRoutes(deps));
   api.use(openApiRoutes());
   api.use(apiKeyRoutes(deps));
   return api;

@@ -173,6 +173,19 @@ export function formatTime(when: Date | string): string {
   return d ? timeText(d) : String(when);
 }
 
+/** The other stores' counts, most first: "3 at Eastgate · 1 at Millbrook"; empty when none holds any. */
+export function formatElsewhere(elsewhere: readonly { name: string; onHand: number }[]): string {
+  return elsewhere.map((s) => `${formatCount(s.onHand)} at ${s.name}`).join(' · ');
+}
+
+/** A part's stock across the chain in one line, this store first: "0 here · 3 at Eastgate". */
+export function formatChainStock(stock: {
+  here: { onHand: number } | null;
+  elsewhere: readonly { name: string; onHand: number }[];
+}): string {
+  return [`${formatCount(stock.here?.onHand ?? 0)} here`, formatElsewhere(stock.elsewhere)].filter(Boolean).join(' · ');
+}
+
 /**
  * Stock as the store's staff read it, "14 on hand · bin A-3"; as a shop's technician sees it
  * (no count), "in stock" or "not in stock".

@@ -7,5 +7,6 @@ export * from './fitments';
 export * from './alternates';
 export * from './interchange';
 export * from './supersessions';
+export * from './locations';
 export * from './stock';
 export * from './suppliers';

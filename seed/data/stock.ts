@@ -1,6 +1,10 @@
+import { EASTGATE, MILLBROOK, QUAYSIDE } from './locations';
 import type { StockSeed } from './types';
 
-/** Aisle A holds coils, aisle B plugs; bins read aisle-bay-shelf. Parts with no row are not stocked. */
+/**
+ * The first store's shelves. Aisle A holds coils, aisle B plugs; bins read aisle-bay-shelf, the same
+ * layout in every store of the chain. Parts with no row are not stocked.
+ */
 const onHand: [partNumber: string, onHand: number, bin: string][] = [
   ['QW-IC 3101', 14, 'A-01-1'],
   ['QW-IC 3102', 6, 'A-01-2'],
@@ -45,8 +49,23 @@ const onHand: [partNumber: string, onHand: number, bin: string][] = [
   ['NR/FW 2217', 16, 'B-12-1'],
 ];
 
-export const stock: StockSeed[] = onHand.map(([partNumber, qty, bin]) => ({
-  partNumber,
-  onHand: qty,
-  bin,
-}));
+/**
+ * The other two stores hold less, and differently: the counts are made up from the first store's so
+ * they differ part by part. A few are set outright for the demo: the fitted plug of the OD57 engine
+ * (QW-SP 1455T) is out at Quayside and 3 are at Eastgate, so the counter shows "0 here · 3 at …".
+ */
+const otherStores: Record<string, [eastgate: number, millbrook: number]> = {
+  'QW-SP 1455T': [3, 0],
+  'QW-IC 3138': [2, 1],
+  'QW-IC 3101': [6, 2],
+  'QW-SP 1406': [20, 12],
+};
+
+export const stock: StockSeed[] = onHand.flatMap(([partNumber, qty, bin]) => {
+  const [eastgate, millbrook] = otherStores[partNumber] ?? [(qty * 5 + 3) % 11, qty % 3 === 0 ? 0 : Math.ceil(qty / 3)];
+  return [
+    { location: QUAYSIDE, partNumber, onHand: qty, bin },
+    { location: EASTGATE, partNumber, onHand: eastgate, bin },
+    { location: MILLBROOK, partNumber, onHand: millbrook, bin },
+  ];
+});

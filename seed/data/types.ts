@@ -116,7 +116,16 @@ export interface SupersessionSeed {
   reason: string;
 }
 
+export interface LocationSeed {
+  name: string;
+  address: string;
+  phone: string;
+  openingHours: string;
+}
+
 export interface StockSeed {
+  /** The store's name (locations.ts). */
+  location: string;
   partNumber: string;
   onHand: number;
   bin: string;

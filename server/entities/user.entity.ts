@@ -31,6 +31,10 @@ export class UserEntity {
   @JoinColumn({ name: 'shop_id' })
   shop?: ShopEntity | null;
 
+  /** The store whose stock the user sees as "here"; null for a shop's technician. */
+  @Column({ type: 'uuid', name: 'home_location_id', nullable: true })
+  homeLocationId: string | null;
+
   @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
   createdAt: Date;
 }

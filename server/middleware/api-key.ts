@@ -17,7 +17,7 @@ const BEARER = /^Bearer[ \t]+([^\s]+)[ \t]*$/i;
 
 /** The key stands in for a person in the handlers; changes it makes are recorded under the admin who made it. */
 function keyActor(key: ApiKeyEntity): Express.User {
-  return { id: key.createdBy, email: '', name: `API key “${key.name}”`, role: ACTS_AS[key.scope], shopId: null };
+  return { id: key.createdBy, email: '', name: `API key “${key.name}”`, role: ACTS_AS[key.scope], shopId: null, homeLocationId: null };
 }
 
 /**

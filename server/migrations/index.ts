@@ -5,6 +5,7 @@ import { FitReports1764600300000 } from './1764600300000-FitReports';
 import { RateLimits1764600500000 } from './1764600500000-RateLimits';
 import { ApiKeys1764600510000 } from './1764600510000-ApiKeys';
 import { SellPriceRule1764600600000 } from './1764600600000-SellPriceRule';
+import { Locations1764600700000 } from './1764600700000-Locations';
 
 // Listed explicitly: globs find nothing under tsx and vitest.
 export const MIGRATIONS = [
@@ -15,4 +16,5 @@ export const MIGRATIONS = [
   RateLimits1764600500000,
   ApiKeys1764600510000,
   SellPriceRule1764600600000,
+  Locations1764600700000,
 ];

@@ -26,6 +26,18 @@ import {
 } from '../../shared/schemas/fit-reports';
 import { createInterchangeBodySchema, interchangeResponseSchema } from '../../shared/schemas/interchange';
 import { jobIdParamSchema, jobsResponseSchema, retryJobResponseSchema } from '../../shared/schemas/jobs';
+import {
+  locationBodySchema,
+  locationQuerySchema,
+  locationResponseSchema,
+  locationsResponseSchema,
+  transferRequestBodySchema,
+  transferResponseSchema,
+  transferStepBodySchema,
+  transfersQuerySchema,
+  transfersResponseSchema,
+  updateLocationBodySchema,
+} from '../../shared/schemas/locations';
 import { outboxResponseSchema } from '../../shared/schemas/outbox';
 import { createPartBodySchema, partDetailSchema, partQuerySchema, updatePartBodySchema } from '../../shared/schemas/parts';
 import {
@@ -88,6 +100,7 @@ export const TAGS = [
   'suppliers',
   'price lists',
   'jobs',
+  'stores',
   'api keys',
 ] as const;
 
@@ -189,6 +202,50 @@ export const ROUTE_DOCS = {
     errors: [404, 409],
   },
 
+  'GET /api/locations': {
+    tag: 'stores',
+    summary: "The chain's stores, the first opened first",
+    responses: { 200: locationsResponseSchema },
+  },
+  'POST /api/locations': {
+    tag: 'stores',
+    summary: 'Add a store to the chain',
+    body: locationBodySchema,
+    responses: { 201: locationResponseSchema },
+    errors: [409],
+  },
+  'PATCH /api/locations/:id': {
+    tag: 'stores',
+    summary: "Change a store's name, address, phone or opening hours",
+    params: idParamSchema,
+    body: updateLocationBodySchema,
+    responses: { 200: locationResponseSchema },
+    errors: [404, 409],
+  },
+  'GET /api/transfers': {
+    tag: 'stores',
+    summary: "The transfers your store sends or receives, newest first (an admin without a home store: the chain's)",
+    query: transfersQuerySchema,
+    responses: { 200: transfersResponseSchema },
+  },
+  'POST /api/transfers': {
+    tag: 'stores',
+    summary: 'Ask another store for parts, to be sent to your home store',
+    description: 'The requester is e-mailed at each later step.',
+    body: transferRequestBodySchema,
+    responses: { 201: transferResponseSchema },
+  },
+  'POST /api/transfers/:id/steps': {
+    tag: 'stores',
+    summary: 'Move a transfer on: pick, send, refuse (the source store), receive or cancel (the requesting store)',
+    description:
+      'Each step applies only from the state it expects: of two people acting at once, the second gets a 409. Receiving moves the stock from the source store to yours in one transaction, never below zero (409 when the source has too few).',
+    params: idParamSchema,
+    body: transferStepBodySchema,
+    responses: { 200: transferResponseSchema },
+    errors: [404, 409],
+  },
+
   'GET /api/api-keys': {
     tag: 'api keys',
     summary: "The store's API keys, without the keys themselves",
@@ -231,14 +288,15 @@ export const ROUTE_DOCS = {
     tag: 'vehicles',
     summary: 'An engine with its fitted coil and plug',
     description:
-      "Stock count and bin for the store's staff; a technician sees in stock yes/no. Cost and margin for buyers and admins only.",
+      "Stock count and bin at the reader's store, then the other stores' counts, for the store's staff; a technician sees in stock yes/no. Among the parts of one position, those in stock here come first. Cost and margin for buyers and admins only. \"Here\" is the signed-in person's home store; for an API key (no home store) the `location` parameter, else the chain's first store.",
     params: idParamSchema,
+    query: locationQuerySchema,
     responses: { 200: engineDetailSchema },
   },
   'GET /api/engines/:id/alternates': {
     tag: 'vehicles',
     summary: "Our parts ranked against an engine's fitted coil or plug",
-    description: 'Ranked by verdict, then closeness, then price; no-go candidates only with `all=1`.',
+    description: "Ranked by verdict, then closeness, then in stock at the reader's store, then price; no-go candidates only with `all=1`.",
     params: idParamSchema,
     query: alternatesQuerySchema,
     responses: { 200: alternatesResponseSchema },
@@ -255,6 +313,8 @@ export const ROUTE_DOCS = {
   'GET /api/parts/:id': {
     tag: 'parts',
     summary: 'A part: spec, interchange (each claim judged), supersession, stock and prices',
+    description:
+      "Stock: `here` (the reader's store: on hand and bin) and `elsewhere` (the other stores holding some). \"Here\" is the signed-in person's home store; for an API key or anyone without one, the `location` parameter, else the chain's first store.",
     params: idParamSchema,
     query: partQuerySchema,
     responses: { 200: partDetailSchema },

@@ -7,7 +7,7 @@ import type { PartClaimRow } from '../repositories/interchange.repository';
 import type { ChainRow, PartRow } from '../repositories/parts.repository';
 import type { PriceRow } from '../repositories/prices.repository';
 import type { PartSpecs } from '../repositories/specs.repository';
-import type { StockLevel } from '../repositories/stock.repository';
+import type { PartStock } from '../repositories/stock.repository';
 import { presentPrice, presentStock, sellPrice, sellPriceBasis } from './stock-price.presenter';
 
 export function presentPart(r: PartRow): PartSummary {
@@ -48,7 +48,7 @@ export function presentInterchangeCheck(check: InterchangeVerdict): InterchangeC
 export interface PartDetailRecord {
   row: PartRow;
   spec: PartSpecs | undefined;
-  stock: StockLevel;
+  stock: PartStock;
   prices: PriceRow[];
   interchange: { claim: PartClaimRow; check: InterchangeVerdict | null }[];
   /** The chain up from the part (the part first, its successor next, the current part last) and down (what it replaced). */
@@ -81,7 +81,7 @@ export function presentPartDetail(d: PartDetailRecord, role: Role): PartDetail {
       supersededBy: d.up[1] ? partRef(d.up[1]) : null,
       current: partRef(d.up[d.up.length - 1] ?? d.row),
     },
-    stock: presentStock(d.stock.onHand, d.stock.bin, role),
+    stock: presentStock(d.stock, role),
     price: sellPrice(d.prices, role),
     sellPriceBasis: sellPriceBasis(d.prices),
     prices: d.prices.map((p) => presentPrice(p, role)),

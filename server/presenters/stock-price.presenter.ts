@@ -2,6 +2,7 @@ import { canSeeCost, type Role } from '../../shared/roles';
 import type { Price, StockView } from '../../shared/schemas/parts';
 import type { SellPriceBasis } from '../../shared/schemas/sell-price';
 import type { PriceRow } from '../repositories/prices.repository';
+import { inStockAnywhere, type PartStock } from '../repositories/stock.repository';
 
 /** Margin on the sell (list) price, in percent with one decimal. */
 export function marginPct(costCents: number, listCents: number): number {
@@ -45,8 +46,9 @@ export function sellPrice(rows: readonly PriceRow[], role: Role): Price | null {
   return best ? presentPrice(best, role) : null;
 }
 
-/** A technician (a shop's login) sees in stock yes/no, not the store's count or bin. */
-export function presentStock(onHand: number, bin: string, role: Role): StockView {
-  if (role === 'technician') return { inStock: onHand > 0 };
-  return { onHand, bin, inStock: onHand > 0 };
+/** A technician (a shop's login) sees in stock yes/no, not the stores' counts or bins. */
+export function presentStock(stock: PartStock, role: Role): StockView {
+  const inStock = inStockAnywhere(stock);
+  if (role === 'technician') return { inStock };
+  return { inStock, here: stock.here, elsewhere: stock.elsewhere };
 }

@@ -4,12 +4,12 @@ import type { ShopEntity, UserEntity } from '../entities';
 
 /** The only way a user row becomes JSON: no password hash ever leaves. */
 export function presentUser(u: UserEntity): User {
-  return { id: u.id, email: u.email, name: u.name, role: u.role, shopId: u.shopId };
+  return { id: u.id, email: u.email, name: u.name, role: u.role, shopId: u.shopId, homeLocationId: u.homeLocationId };
 }
 
 /** POST /api/auth/login, GET /api/auth/me, POST /api/auth/accept-invite. */
 export const presentUserResponse = (user: User): UserResponse => ({
-  user: { id: user.id, email: user.email, name: user.name, role: user.role, shopId: user.shopId },
+  user: { id: user.id, email: user.email, name: user.name, role: user.role, shopId: user.shopId, homeLocationId: user.homeLocationId },
 });
 
 export const presentInvitation = (invitation: { email: string; name: string }): InvitationResponse => ({

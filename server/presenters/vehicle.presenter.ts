@@ -11,7 +11,7 @@ import type { EngineRecord } from '../repositories/engines.repository';
 import type { PartRow } from '../repositories/parts.repository';
 import type { PriceRow } from '../repositories/prices.repository';
 import type { PartSpecs } from '../repositories/specs.repository';
-import type { StockLevel } from '../repositories/stock.repository';
+import type { PartStock } from '../repositories/stock.repository';
 import type { VehicleEngineRow } from '../repositories/vehicles.repository';
 import { presentPart, presentSpec } from './part.presenter';
 import { presentStock, sellPrice } from './stock-price.presenter';
@@ -36,7 +36,7 @@ export interface FitmentRecord {
   spec: PartSpecs | undefined;
   position: Fitment['position'];
   quantity: number;
-  stock: StockLevel;
+  stock: PartStock;
   prices: PriceRow[];
 }
 
@@ -54,7 +54,7 @@ export function presentEngineDetail(d: EngineDetailRecord, role: Role): EngineDe
       spec: presentSpec(f.spec),
       position: f.position,
       quantity: f.quantity,
-      stock: presentStock(f.stock.onHand, f.stock.bin, role),
+      stock: presentStock(f.stock, role),
       price: sellPrice(f.prices, role),
     })),
   };

@@ -43,7 +43,7 @@ SELECT p.id, b.name AS brand, p.part_number, p.part_number_norm, p.gtin, p.kind,
   LEFT JOIN coil_spec cs ON cs.part_id = p.id
   LEFT JOIN plug_spec ps ON ps.part_id = p.id
   LEFT JOIN brand_heat_code hc ON hc.brand_id = p.brand_id AND hc.code = ps.heat_code
-  LEFT JOIN stock s ON s.part_id = p.id
+  LEFT JOIN LATERAL (SELECT sum(x.on_hand)::int AS on_hand FROM stock x WHERE x.part_id = p.id) s ON true
   LEFT JOIN veh ON veh.part_id = p.id
 `;
 
@@ -155,7 +155,7 @@ export function exactNumberRows(ex: Executor, norm: string, limit: number): Prom
                  JOIN part fp ON fp.brand_id = fb.id AND fp.part_number_norm = i.foreign_number_norm
                 WHERE i.part_id = c.id AND i.foreign_number_norm = c.num LIMIT 1) END AS original_part_id
         FROM current c JOIN part p ON p.id = c.id JOIN brand b ON b.id = p.brand_id AND b.ours
-        LEFT JOIN stock s ON s.part_id = p.id
+        LEFT JOIN LATERAL (SELECT sum(x.on_hand)::int AS on_hand FROM stock x WHERE x.part_id = p.id) s ON true
        ORDER BY c.pri, p.part_number LIMIT $2`,
     [norm, limit],
   );

@@ -36,6 +36,7 @@ export interface NewUser {
   name: string;
   role: Role;
   shopId: string | null;
+  homeLocationId: string | null;
 }
 
 /** A user without a password: an invitation sets it. */
@@ -47,7 +48,7 @@ export function insertUser(ex: EntityManager, u: NewUser): Promise<UserEntity> {
 export async function updateUserAccess(
   ex: EntityManager,
   id: string,
-  access: { role: Role; shopId: string | null; disabled: boolean },
+  access: { role: Role; shopId: string | null; homeLocationId: string | null; disabled: boolean },
 ): Promise<void> {
   await ex.getRepository(UserEntity).update({ id }, access);
 }

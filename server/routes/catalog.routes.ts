@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { createBrandBodySchema } from '../../shared/schemas/brands';
 import { idParamSchema } from '../../shared/schemas/common';
+import { locationQuerySchema } from '../../shared/schemas/locations';
 import { createInterchangeBodySchema } from '../../shared/schemas/interchange';
 import { createPartBodySchema, partQuerySchema, updatePartBodySchema } from '../../shared/schemas/parts';
 import { searchQuerySchema } from '../../shared/schemas/search';
@@ -17,6 +18,7 @@ import { listBrands } from '../services/catalog/brands.service';
 import { CatalogEditService } from '../services/catalog/catalog-edit.service';
 import { getEngineDetail, getPartDetail } from '../services/catalog/part-detail.service';
 import { listEngines, listMakes, listModels, listYears } from '../services/catalog/vehicles.service';
+import { hereFor } from '../services/locations.service';
 import { searchParts } from '../services/search.service';
 import { mount } from './mount';
 
@@ -43,18 +45,20 @@ export function catalogRoutes(deps: AppDeps): Router {
 
   mount(r, 'GET /api/engines/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    res.json(presentEngineDetail(await getEngineDetail(ds, id), currentUser(req).role));
+    const { location } = parseQuery(locationQuerySchema, req);
+    res.json(presentEngineDetail(await getEngineDetail(ds, id, hereFor(req.user, location)), currentUser(req).role));
   });
 
   mount(r, 'GET /api/search', async (req, res) => {
-    const result = await searchParts(deps.search, parseQuery(searchQuerySchema, req), ds);
+    const query = parseQuery(searchQuerySchema, req);
+    const result = await searchParts(deps.search, query, ds, hereFor(req.user, query.location));
     res.json(presentSearchResults(result, currentUser(req).role));
   });
 
   mount(r, 'GET /api/parts/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    const { engineId } = parseQuery(partQuerySchema, req);
-    res.json(presentPartDetail(await getPartDetail(ds, id, engineId), currentUser(req).role));
+    const { engineId, location } = parseQuery(partQuerySchema, req);
+    res.json(presentPartDetail(await getPartDetail(ds, id, hereFor(req.user, location), engineId), currentUser(req).role));
   });
 
   mount(r, 'GET /api/brands', async (_req, res) => {
@@ -69,14 +73,14 @@ export function catalogRoutes(deps: AppDeps): Router {
   mount(r, 'POST /api/parts', async (req, res) => {
     const body = parseBody(createPartBodySchema, req);
     const user = currentUser(req);
-    res.status(201).json(presentPartDetail(await edits.createPart(user.id, body), user.role));
+    res.status(201).json(presentPartDetail(await edits.createPart(user.id, body, hereFor(req.user)), user.role));
   });
 
   mount(r, 'PATCH /api/parts/:id', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
     const body = parseBody(updatePartBodySchema, req);
     const user = currentUser(req);
-    res.json(presentPartDetail(await edits.updatePart(user.id, id, body), user.role));
+    res.json(presentPartDetail(await edits.updatePart(user.id, id, body, hereFor(req.user)), user.role));
   });
 
   mount(r, 'POST /api/interchange', async (req, res) => {

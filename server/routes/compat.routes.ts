@@ -12,6 +12,7 @@ import { presentCoilComparison, presentPlugComparison } from '../presenters/comp
 import { engineAlternates } from '../services/compat/alternates.service';
 import { runBenchTest } from '../services/compat/bench.service';
 import { compareCoilRequest, comparePlugRequest } from '../services/compat/compare.service';
+import { hereFor } from '../services/locations.service';
 import { mount } from './mount';
 
 export function compatRoutes(deps: AppDeps): Router {
@@ -30,7 +31,8 @@ export function compatRoutes(deps: AppDeps): Router {
 
   mount(r, 'GET /api/engines/:id/alternates', async (req, res) => {
     const { id } = parseParams(idParamSchema, req);
-    const ranked = await engineAlternates(ds, id, parseQuery(alternatesQuerySchema, req));
+    const query = parseQuery(alternatesQuerySchema, req);
+    const ranked = await engineAlternates(ds, id, query, hereFor(req.user, query.location));
     res.json(presentAlternates(ranked, currentUser(req).role));
   });
 

@@ -23,6 +23,8 @@ const ADMIN = ['admin'] as const;
 const BUYERS = ['buyer', 'admin'] as const;
 const COUNTER = ['clerk', 'technician', 'buyer', 'admin'] as const;
 const COMPARE = ['clerk', 'technician', 'buyer', 'admin'] as const;
+// The store's staff: they work at a store of the chain and move its stock.
+const STAFF = ['clerk', 'buyer', 'admin'] as const;
 // Bench testing is the shop technician's job (product.md, Roles); an admin may do everything.
 const BENCH = ['technician', 'admin'] as const;
 // The store's other systems: read keys look things up, write keys also keep the catalog and price lists.
@@ -85,6 +87,12 @@ export const ROUTE_ACCESS = {
   'POST /api/price-lists/:id/preview': BUYERS_OR_WRITE_KEY,
   'POST /api/price-lists/:id/commit': BUYERS_OR_WRITE_KEY,
   'POST /api/price-lists/:id/discard': BUYERS_OR_WRITE_KEY,
+  'GET /api/locations': { people: STAFF, key: 'read' },
+  'POST /api/locations': ADMIN,
+  'PATCH /api/locations/:id': ADMIN,
+  'GET /api/transfers': STAFF,
+  'POST /api/transfers': STAFF,
+  'POST /api/transfers/:id/steps': STAFF,
   'GET /api/api-keys': ADMIN,
   'POST /api/api-keys': ADMIN,
   'DELETE /api/api-keys/:id': ADMIN,

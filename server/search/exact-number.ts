@@ -30,8 +30,6 @@ export async function exactNumberHits(
     matchedBy: r.matched_by,
     matchedNumber: r.matched_number,
     inStock: r.on_hand > 0,
-    onHand: r.on_hand,
-    bin: r.bin,
     hasSpec: r.has_spec,
   }));
   return { hits, originals };

@@ -6,14 +6,16 @@ import { PART_KINDS, type PartKind } from '../../shared/schemas/specs';
 import type { Executor } from '../db/executor';
 import { readOnly } from '../db/read-only';
 import { presentInterchangeCheck } from '../presenters/part.presenter';
-import { presentSearchHit } from '../presenters/search.presenter';
+import { presentSearchHit, withHitStock } from '../presenters/search.presenter';
 import { claimOriginals } from '../repositories/interchange.repository';
 import { printedNumbers } from '../repositories/search.repository';
 import { claimKey, exactNumberHits, type ClaimOriginals } from '../search/exact-number';
+import { stockOf } from '../repositories/stock.repository';
 import { buildFilters } from '../search/filters';
 import { FACET_ATTRIBUTES } from '../search/part-document';
 import type { PartSearchIndex } from '../search/search-index';
 import { interchangeVerdict } from './compat/interchange-verdict.service';
+import type { Here } from './locations.service';
 import { getSettings } from './settings.service';
 
 /** The foreign parts of the index hits' interchange claims: one query for them all. */
@@ -100,7 +102,14 @@ function kindFromWords(raw: string, kind: PartKind | undefined): { words: string
  * A number is looked up exactly in PostgreSQL first (read-only work, on a replica where there is
  * one); the search index answers typos and free text.
  */
-export async function searchParts(index: PartSearchIndex, query: SearchQuery, ds: DataSource): Promise<SearchResponse> {
+export async function searchParts(index: PartSearchIndex, query: SearchQuery, ds: DataSource, here: Here): Promise<SearchResponse> {
+  const result = await searchIndexOrNumber(index, query, ds);
+  const ids = result.hits.map((h) => h.partId);
+  const stock = await readOnly(ds, async (ex) => stockOf(ex, ids, await here(ex)));
+  return { ...result, hits: withHitStock(result.hits, stock) };
+}
+
+async function searchIndexOrNumber(index: PartSearchIndex, query: SearchQuery, ds: DataSource): Promise<SearchResponse> {
   const { compat } = await getSettings(ds);
   const raw = query.q.trim();
   const numberLike = looksLikePartNumber(raw);

@@ -1,4 +1,5 @@
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
+import type { Role } from '../../shared/roles';
 import { passwordProblem } from '../../shared/password-policy';
 import { INVITE_TTL_HOURS, type AcceptInviteBody } from '../../shared/schemas/auth';
 import { type InviteBody, type UpdateUserBody } from '../../shared/schemas/users';
@@ -18,9 +19,17 @@ import {
   setPasswordHash,
   updateUserAccess,
 } from '../repositories/users.repository';
+import { findLocation, firstLocationId } from '../repositories/locations.repository';
 import { endSessionsOf } from './auth.service';
 import { inviteTokenHash, newInviteToken } from './invite-token';
 import { hashPassword } from './password';
+
+/** The store's staff have a home store (the one asked for, else the chain's first); a shop's technician has none. */
+async function homeStoreFor(m: EntityManager, role: Role, wanted: string | null): Promise<string | null> {
+  if (role === 'technician') return null;
+  if (wanted && !(await findLocation(m, wanted))) throw AppError.badRequest('homeLocationId: no such store');
+  return wanted ?? (await firstLocationId(m));
+}
 
 export function listUsers(ds: DataSource): Promise<UserEntity[]> {
   return userRows(ds.manager);
@@ -49,7 +58,8 @@ export async function inviteUser(
     }
     const shopId = body.role === 'technician' ? (body.shopId ?? null) : null;
     if (shopId && !(await findShop(m, shopId))) throw AppError.badRequest('shopId: no such shop');
-    const created = await insertUser(m, { email: body.email, name: body.name, role: body.role, shopId });
+    const homeLocationId = await homeStoreFor(m, body.role, body.homeLocationId ?? null);
+    const created = await insertUser(m, { email: body.email, name: body.name, role: body.role, shopId, homeLocationId });
     const invitation = await insertInvitation(m, {
       userId: created.id,
       tokenHash: inviteTokenHash(newInviteToken()),
@@ -114,7 +124,8 @@ export async function updateUser(ds: DataSource, actorId: string, id: string, bo
     const role = body.role ?? u.role;
     const shopId = role === 'technician' ? (body.shopId ?? u.shopId) : null;
     if (role === 'technician' && !shopId) throw AppError.badRequest('shopId: a technician belongs to a shop');
-    await updateUserAccess(m, id, { role, shopId, disabled: body.disabled ?? u.disabled });
+    const homeLocationId = await homeStoreFor(m, role, body.homeLocationId ?? u.homeLocationId);
+    await updateUserAccess(m, id, { role, shopId, homeLocationId, disabled: body.disabled ?? u.disabled });
     await audit(m, { actorId, action: 'user.update', entityType: 'user', entityId: id, data: { ...body } });
     const updated = await findUserWithShop(m, id);
     if (!updated) throw AppError.notFound('User');

@@ -1,11 +1,12 @@
 import { z } from 'zod';
 import { checkSchema, verdictSchema } from './compat';
 import { partSummarySchema, priceSchema, stockViewSchema } from './parts';
+import { locationQuerySchema } from './locations';
 import { PART_KINDS } from './specs';
 
 /** GET /api/engines/:id/alternates: our parts ranked against the engine's fitted coil or plug. */
 
-export const alternatesQuerySchema = z.object({
+export const alternatesQuerySchema = locationQuerySchema.extend({
   kind: z.enum(PART_KINDS),
   /** Include the no-go candidates too. */
   all: z.enum(['1', 'true', '0', 'false']).optional(),
@@ -19,7 +20,7 @@ export const alternateSchema = z
     /** How far from the original, for ranking within a verdict (lower is closer). */
     deviation: z.number(),
     checks: z.array(checkSchema),
-    /** On hand and bin for the store's staff, in stock yes/no for a technician (as a part's detail). */
+    /** This store's count and bin, then the other stores' (the ranking prefers stock here among equals); yes/no for a technician. */
     stock: stockViewSchema,
     price: priceSchema.nullable(),
   })

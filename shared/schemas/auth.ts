@@ -35,6 +35,8 @@ export const userSchema = z
     name: z.string(),
     role: z.enum(ROLES),
     shopId: uuidSchema.nullable(),
+    /** The store whose stock is "here" for this person; null for a shop's technician. */
+    homeLocationId: uuidSchema.nullable(),
   })
   .meta({ id: 'User' });
 export type User = z.infer<typeof userSchema>;

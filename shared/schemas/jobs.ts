@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
 /** The follow-up jobs that run after a commit, each worked by the job queue in PostgreSQL. */
-export const JOB_NAMES = ['search.refresh', 'search.rebuild', 'mail.send'] as const;
+export const JOB_NAMES = ['search.refresh', 'search.rebuild', 'mail.send', 'mail.transfer'] as const;
 export const jobNameSchema = z.enum(JOB_NAMES);
 export type JobName = z.infer<typeof jobNameSchema>;
 
@@ -9,6 +9,7 @@ export const JOB_LABELS: Record<JobName, string> = {
   'search.refresh': 'Search index refresh',
   'search.rebuild': 'Search index rebuild',
   'mail.send': 'E-mail',
+  'mail.transfer': 'Transfer e-mail',
 };
 
 /** The states the Jobs page lists: waiting for another attempt, or out of attempts. */

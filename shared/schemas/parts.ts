@@ -3,6 +3,7 @@ import { isValidGtin } from '../gtin';
 import { printedNumberSchema, uuidSchema } from './common';
 import { interchangeCheckSchema } from './compat';
 import { interchangeClaimSchema } from './interchange';
+import { chainStockSchema, locationQuerySchema } from './locations';
 import { brandNameSchema } from './brands';
 import { sellPriceBasisSchema } from './sell-price';
 import { coilSpecSchema, PART_KINDS, partSpecSchema, plugSpecSchema } from './specs';
@@ -51,7 +52,7 @@ export const updatePartBodySchema = z
 export type UpdatePartBody = z.infer<typeof updatePartBodySchema>;
 
 /** GET /api/parts/:id?engineId=: with an engine, each interchange claim is judged on it. */
-export const partQuerySchema = z.object({ engineId: uuidSchema.optional() });
+export const partQuerySchema = locationQuerySchema.extend({ engineId: uuidSchema.optional() });
 
 // ---------- responses ----------
 
@@ -71,11 +72,11 @@ export const priceSchema = z
   .meta({ id: 'Price' });
 export type Price = z.infer<typeof priceSchema>;
 
-export const stockSchema = z.object({ onHand: z.number().int(), bin: z.string(), inStock: z.boolean() });
-export type Stock = z.infer<typeof stockSchema>;
-
-/** Clerks, buyers and admins get count and bin; a technician (a shop's login) only in stock yes/no. */
-export const stockViewSchema = z.union([stockSchema, z.object({ inStock: z.boolean() })]);
+/**
+ * Clerks, buyers and admins get this store's count and bin and the other stores' counts; a
+ * technician (a shop's login) only in stock yes/no (at any store of the chain).
+ */
+export const stockViewSchema = z.union([chainStockSchema, z.object({ inStock: z.boolean() })]);
 export type StockView = z.infer<typeof stockViewSchema>;
 
 export const partSummarySchema = z

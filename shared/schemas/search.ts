@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { uuidSchema } from './common';
 import { interchangeCheckSchema } from './compat';
+import { chainStockSchema } from './locations';
 import { COIL_ARCHITECTURES, COIL_DRIVERS, PART_KINDS, PLUG_SEATS } from './specs';
 import { text } from './text';
 
@@ -39,6 +40,8 @@ export const searchQuerySchema = searchFacetQuerySchema.extend({
   engineId: uuidSchema.optional(),
   /** Also count every match by spec field, for the filter controls (a pass over all matches). */
   facets: bool.optional(),
+  /** For an API key, which has no home store: the store whose stock is "here" (else the chain's first). */
+  location: uuidSchema.optional(),
 });
 export type SearchQuery = z.infer<typeof searchQuerySchema>;
 
@@ -57,11 +60,10 @@ export const searchHitSchema = z
      * match, where the clerk's typing is not the number found. Null for exact and word matches.
      */
     matchedPrinted: z.string().nullable().optional(),
+    /** On hand at any store of the chain. */
     inStock: z.boolean(),
-    /** The store's count: absent for technicians, who see in stock yes/no only. */
-    onHand: z.number().int().optional(),
-    /** The shelf the part is in: absent for technicians, as the count. */
-    bin: z.string().optional(),
+    /** This store's count and bin, then the other stores': absent for technicians, who see in stock yes/no only. */
+    stock: chainStockSchema.optional(),
     hasSpec: z.boolean(),
     /** For a hit found through interchange: the verdict of the foreign part's spec against ours. */
     check: interchangeCheckSchema.nullable().optional(),

@@ -14,6 +14,8 @@ export const inviteBodySchema = z
     name: text({ min: 1, max: 120 }),
     role: z.enum(ROLES),
     shopId: uuidSchema.optional().nullable(),
+    /** The store's staff work at one store; without it, the chain's first. */
+    homeLocationId: uuidSchema.optional().nullable(),
   })
   .refine((b) => b.role !== 'technician' || !!b.shopId, {
     path: ['shopId'],
@@ -22,7 +24,12 @@ export const inviteBodySchema = z
 export type InviteBody = z.infer<typeof inviteBodySchema>;
 
 export const updateUserBodySchema = z
-  .object({ role: z.enum(ROLES).optional(), disabled: z.boolean().optional(), shopId: uuidSchema.nullable().optional() })
+  .object({
+    role: z.enum(ROLES).optional(),
+    disabled: z.boolean().optional(),
+    shopId: uuidSchema.nullable().optional(),
+    homeLocationId: uuidSchema.nullable().optional(),
+  })
   .refine((b) => Object.keys(b).length > 0, { message: 'nothing to change' });
 export type UpdateUserBody = z.infer<typeof updateUserBodySchema>;
 

@@ -19,6 +19,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/catalog', label: 'Catalog', roles: ['buyer', 'admin'] },
   { to: '/team', label: 'Team', roles: ['admin'] },
   { to: '/outbox', label: 'Outbox', roles: ['admin'] },
+  { to: '/transfers', label: 'Transfers', roles: ['clerk', 'buyer', 'admin'] },
   { to: '/jobs', label: 'Jobs', roles: ['admin'] },
   { to: '/settings', label: 'Settings', roles: ['admin'] },
   { to: '/api-keys', label: 'API keys', roles: ['admin'] },

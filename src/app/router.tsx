@@ -35,6 +35,7 @@ export const router = createBrowserRouter([
           { path: 'team', lazy: page(() => import('./routes/team/team'), 'TeamPage') },
           { path: 'outbox', lazy: page(() => import('./routes/outbox/outbox'), 'OutboxPage') },
           { path: 'jobs', lazy: page(() => import('./routes/jobs/jobs'), 'JobsPage') },
+          { path: 'transfers', lazy: page(() => import('./routes/transfers/transfers'), 'TransfersPage') },
           { path: 'api-keys', lazy: page(() => import('./routes/api-keys/api-keys'), 'ApiKeysPage') },
           { path: '*', lazy: page(() => import('./routes/not-found'), 'NotFoundPage') },
         ],

@@ -35,9 +35,9 @@ describe('journeys 1 and 2: the Counter', () => {
     await coil.getByRole('button', { name: 'QW-IC 3101' }).waitFor();
     await plug.getByRole('button', { name: 'QW-SP 1406' }).waitFor();
     // Seed: QW-IC 3101 has 14 on hand in bin A-01-1 and sells for $49.99; QW-SP 1406 has 64 in B-01-1 at $7.49.
-    expect(await coil.textContent()).toMatch(/14 on hand · bin A-01-1/);
+    expect(await coil.textContent()).toMatch(/14 here · bin A-01-1/);
     expect(await coil.textContent()).toContain('$49.99');
-    expect(await plug.textContent()).toMatch(/64 on hand · bin B-01-1/);
+    expect(await plug.textContent()).toMatch(/64 here · bin B-01-1/);
     expect(await plug.textContent()).toContain('$7.49');
     expect(await coil.textContent()).toMatch(/4 per engine/);
 

@@ -47,7 +47,14 @@ describe('api client', () => {
         if (url === '/api/auth/csrf') return respond(200, { token: `tok-${++issued}` });
         if (url === '/api/auth/login')
           return respond(200, {
-            user: { id: '00000000-0000-4000-8000-000000000001', email: 'c@example.test', name: 'C', role: 'clerk', shopId: null },
+            user: {
+              id: '00000000-0000-4000-8000-000000000001',
+              email: 'c@example.test',
+              name: 'C',
+              role: 'clerk',
+              shopId: null,
+              homeLocationId: null,
+            },
           });
         if (url === '/api/auth/logout') return new Response(null, { status: 204 });
         return respond(200, { ok: true });

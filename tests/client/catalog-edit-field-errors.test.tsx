@@ -111,7 +111,14 @@ function stubApi(answers: Record<string, Reply>) {
 }
 
 function renderCatalog(search: string) {
-  const user: User = { id: '00000000-0000-4000-8000-000000000002', email: 'b@x.test', name: 'Blake Buyer', role: 'buyer', shopId: null };
+  const user: User = {
+    id: '00000000-0000-4000-8000-000000000002',
+    email: 'b@x.test',
+    name: 'Blake Buyer',
+    role: 'buyer',
+    shopId: null,
+    homeLocationId: null,
+  };
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   render(
     <QueryClientProvider client={client}>

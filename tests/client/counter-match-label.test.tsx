@@ -41,7 +41,6 @@ const hit = (partNumber: string, verdict?: 'go' | 'review' | 'no-go'): SearchHit
   matchedBy: 'interchange',
   matchedNumber: 'SPF52135',
   inStock: true,
-  onHand: 1,
   hasSpec: true,
   check: verdict ? { verdict, concerns: [], engine: 'KM13' } : null,
 });

@@ -78,7 +78,7 @@ const ENGINE = {
       spec: coilSpec,
       position: 'ignition coil',
       quantity: 4,
-      stock: { onHand: 14, bin: 'A-01-1', inStock: true },
+      stock: { inStock: true, here: { locationId: '00000000-0000-4000-8000-0000000000a1', onHand: 14, bin: 'A-01-1' }, elsewhere: [] },
       price: price(4999),
     },
   ],
@@ -92,7 +92,7 @@ const searchHit = (id: string, partNumber: string, hasSpec = true) => ({
   matchedBy: 'number',
   matchedNumber: partNumber.replace(/\W/g, ''),
   inStock: true,
-  onHand: 3,
+  stock: { inStock: true, here: { locationId: '00000000-0000-4000-8000-0000000000a1', onHand: 3, bin: 'B-09-9' }, elsewhere: [] },
   hasSpec,
 });
 const partDetail = (p: PartSummary, spec: unknown, prices: unknown[]) => ({
@@ -100,7 +100,7 @@ const partDetail = (p: PartSummary, spec: unknown, prices: unknown[]) => ({
   spec,
   interchange: [],
   supersession: { supersedes: [], supersededBy: null, current: { id: p.id, partNumber: p.partNumber } },
-  stock: { onHand: 3, bin: 'B-09-9', inStock: true },
+  stock: { inStock: true, here: { locationId: '00000000-0000-4000-8000-0000000000a1', onHand: 3, bin: 'B-09-9' }, elsewhere: [] },
   price: price(999),
   prices,
 });
@@ -141,7 +141,14 @@ function stubApi(extra: Record<string, unknown> = {}) {
 }
 
 function renderCounter(role: Role = 'clerk') {
-  const user: User = { id: '00000000-0000-4000-8000-000000000001', email: 'c@x.test', name: 'Casey Clerk', role, shopId: null };
+  const user: User = {
+    id: '00000000-0000-4000-8000-000000000001',
+    email: 'c@x.test',
+    name: 'Casey Clerk',
+    role,
+    shopId: null,
+    homeLocationId: null,
+  };
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   render(
     <QueryClientProvider client={client}>
@@ -243,7 +250,7 @@ describe('Counter page', () => {
 
     const coil = await screen.findByRole('region', { name: 'Fitted ignition coil' });
     await within(coil).findByRole('button', { name: 'QW-IC 3101' });
-    expect(coil.textContent).toContain('14 on hand · bin A-01-1');
+    expect(coil.textContent).toContain('14 here · bin A-01-1');
     expect(coil.textContent).toContain('$49.99');
     // The alternates route answers 404 here: the slot says so instead of failing the page.
     await within(coil).findByText('Ranked alternates are not available yet.');

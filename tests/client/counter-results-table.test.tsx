@@ -12,12 +12,16 @@ const hit = (partNumber: string, over: Partial<SearchHit> = {}): SearchHit => ({
   matchedBy: 'number',
   matchedNumber: partNumber.replace(/\W/g, ''),
   inStock: true,
-  onHand: 7,
+  stock: { inStock: true, here: { locationId: '00000000-0000-4000-8000-0000000000a1', onHand: 7, bin: 'B-01-1' }, elsewhere: [] },
   hasSpec: true,
   ...over,
 });
 
-const HITS = [hit('QW-SP 1406'), hit('QW-SP 1407'), hit('QW-SP 1435', { inStock: false, onHand: 0 })];
+const HITS = [
+  hit('QW-SP 1406'),
+  hit('QW-SP 1407'),
+  hit('QW-SP 1435', { inStock: false, stock: { inStock: false, here: null, elsewhere: [] } }),
+];
 
 function renderTable(props: Partial<Parameters<typeof ResultsTable>[0]> = {}) {
   const onOpen = vi.fn();
@@ -78,10 +82,10 @@ describe('results table keyboard', () => {
 
   it('shows stock as the rest of the app does: on hand to the store, in stock or not to a technician', () => {
     const store = renderTable();
-    expect(store.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['7 on hand', '7 on hand', '0 on hand']);
+    expect(store.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['7 here', '7 here', '0 here']);
     cleanup();
     // The server leaves the count out for a technician (search.presenter.ts).
-    const tech = renderTable({ hits: HITS.map(({ onHand: _onHand, ...h }) => h) });
+    const tech = renderTable({ hits: HITS.map(({ stock: _stock, ...h }) => h) });
     expect(tech.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['in stock', 'in stock', 'not in stock']);
   });
 

@@ -7,7 +7,7 @@ import type { TeamMember } from '@shared/schemas/users';
 import { TeamPage } from '@/app/routes/team/team';
 
 const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
-const ME: User = { id: uuid(1), email: 'admin@x.test', name: 'Avery Admin', role: 'admin', shopId: null };
+const ME: User = { id: uuid(1), email: 'admin@x.test', name: 'Avery Admin', role: 'admin', shopId: null, homeLocationId: null };
 const SHOP = { id: uuid(9), name: 'Northgate Garage' };
 const member = (n: number, name: string, role: TeamMember['role'], over: Partial<TeamMember> = {}): TeamMember => ({
   id: uuid(n),
@@ -15,6 +15,7 @@ const member = (n: number, name: string, role: TeamMember['role'], over: Partial
   name,
   role,
   shopId: null,
+  homeLocationId: null,
   disabled: false,
   shopName: null,
   invitePending: false,

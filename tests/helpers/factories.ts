@@ -8,7 +8,11 @@ export const TEST_PASSWORD = 'test-password-123';
 let cachedHash: Promise<string> | null = null;
 
 /** A fresh user of the given role with a unique e-mail; technicians get a fresh shop. */
-export async function makeUser(ds: DataSource, role: Role, opts: { disabled?: boolean; shopId?: string } = {}): Promise<UserEntity> {
+export async function makeUser(
+  ds: DataSource,
+  role: Role,
+  opts: { disabled?: boolean; shopId?: string; homeLocationId?: string } = {},
+): Promise<UserEntity> {
   cachedHash ??= hashPassword(TEST_PASSWORD);
   const tag = randomUUID().slice(0, 8);
   let shopId = opts.shopId ?? null;
@@ -22,5 +26,6 @@ export async function makeUser(ds: DataSource, role: Role, opts: { disabled?: bo
     passwordHash: await cachedHash,
     disabled: opts.disabled ?? false,
     shopId,
+    homeLocationId: opts.homeLocationId ?? null,
   });
 }

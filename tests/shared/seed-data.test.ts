@@ -27,6 +27,7 @@ import {
   parts,
   PRICE_EFFECTIVE_DATE,
   stock,
+  locations,
   supersessions,
   supplierPrices,
   suppliers,
@@ -259,7 +260,8 @@ describe('stock, suppliers and prices', () => {
     expect(stock.every((s) => ourNumbers.has(s.partNumber) && Number.isInteger(s.onHand) && s.onHand >= 0)).toBe(true);
     expect(stock.every((s) => /^[A-Z]-\d{2}-\d$/.test(s.bin))).toBe(true);
     expect(stock.some((s) => s.onHand === 0)).toBe(true);
-    expect(new Set(stock.map((s) => s.partNumber)).size).toBe(stock.length);
+    expect(new Set(stock.map((s) => `${s.location}|${s.partNumber}`)).size).toBe(stock.length);
+    expect(new Set(stock.map((s) => s.location))).toEqual(new Set(locations.map((l) => l.name)));
   });
 
   it('two suppliers price our parts in whole cents', () => {

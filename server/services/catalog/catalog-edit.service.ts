@@ -13,6 +13,7 @@ import { chainReaches, findPartRows, insertPart, lockPart, partKindOf, updatePar
 import { heatCodeKnown, writeCoilSpec, writePlugSpec } from '../../repositories/specs.repository';
 import { getSettings } from '../settings.service';
 import { getBrand } from './brands.service';
+import type { Here } from '../locations.service';
 import { loadPartDetail } from './part-detail.service';
 
 const brandNorm = (name: string) => name.trim().toLowerCase();
@@ -72,7 +73,7 @@ export class CatalogEditService {
     return getBrand(this.ds.manager, id);
   }
 
-  async createPart(actorId: string, body: CreatePartBody): Promise<PartDetailRecord> {
+  async createPart(actorId: string, body: CreatePartBody, here: Here): Promise<PartDetailRecord> {
     const id = await this.ds.transaction(async (m) => {
       const brandId = await brandIdByName(m, body.brand);
       const partId = await insertPart(m, {
@@ -98,10 +99,10 @@ export class CatalogEditService {
       await this.jobs.enqueue(m, 'search.refresh', { partIds: [partId] });
       return partId;
     });
-    return this.partAsWritten(id);
+    return this.partAsWritten(id, here);
   }
 
-  async updatePart(actorId: string, id: string, body: UpdatePartBody): Promise<PartDetailRecord> {
+  async updatePart(actorId: string, id: string, body: UpdatePartBody, here: Here): Promise<PartDetailRecord> {
     await this.ds.transaction(async (m) => {
       const part = await lockPart(m, id);
       if (!part) throw AppError.notFound('Part');
@@ -123,7 +124,7 @@ export class CatalogEditService {
       const touched = [id, part.superseded_by_id, body.supersededById].filter((x): x is string => !!x);
       await this.jobs.enqueue(m, 'search.refresh', { partIds: touched });
     });
-    return this.partAsWritten(id);
+    return this.partAsWritten(id, here);
   }
 
   async createInterchange(actorId: string, body: CreateInterchangeBody): Promise<InterchangeClaimRow> {
@@ -148,7 +149,7 @@ export class CatalogEditService {
   }
 
   /** The part as the edit left it: read on the primary, as a replica may not have the edit yet. */
-  private async partAsWritten(id: string): Promise<PartDetailRecord> {
-    return loadPartDetail(this.ds.manager, id, (await getSettings(this.ds)).compat);
+  private async partAsWritten(id: string, here: Here): Promise<PartDetailRecord> {
+    return loadPartDetail(this.ds.manager, id, (await getSettings(this.ds)).compat, await here(this.ds.manager));
   }
 }

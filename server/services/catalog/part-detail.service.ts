@@ -10,8 +10,10 @@ import { claimsOfPart } from '../../repositories/interchange.repository';
 import { findPartRows, supersessionDown, supersessionUp } from '../../repositories/parts.repository';
 import { pricesOf } from '../../repositories/prices.repository';
 import { findSpecs } from '../../repositories/specs.repository';
-import { NO_STOCK, stockOf } from '../../repositories/stock.repository';
+import { noStock, stockOf } from '../../repositories/stock.repository';
 import { interchangeVerdict } from '../compat/interchange-verdict.service';
+import type { Here } from '../locations.service';
+import { fittedOrder } from './fitted-order';
 import { getSettings } from '../settings.service';
 
 /**
@@ -23,12 +25,13 @@ export async function loadPartDetail(
   ex: EntityManager,
   id: string,
   settings: CompatSettings,
+  hereId: string | null,
   engineId?: string,
 ): Promise<PartDetailRecord> {
   const row = (await findPartRows(ex, [id])).get(id);
   if (!row) throw AppError.notFound('Part');
   const spec = (await findSpecs(ex, [id])).get(id);
-  const stock = (await stockOf(ex, [id])).get(id) ?? NO_STOCK;
+  const stock = (await stockOf(ex, [id], hereId)).get(id) ?? noStock(hereId);
   const prices = (await pricesOf(ex, [id])).get(id) ?? [];
   const claims = await claimsOfPart(ex, id);
   // Each claim of equivalence carries the verdict of the foreign part's own spec against ours.
@@ -47,40 +50,43 @@ export async function loadPartDetail(
 }
 
 /** GET /api/parts/:id: read-only work, on a replica where there is one. */
-export async function getPartDetail(ds: DataSource, id: string, engineId?: string): Promise<PartDetailRecord> {
+export async function getPartDetail(ds: DataSource, id: string, here: Here, engineId?: string): Promise<PartDetailRecord> {
   const { compat } = await getSettings(ds);
-  return readOnly(ds, (ex) => loadPartDetail(ex, id, compat, engineId));
+  return readOnly(ds, async (ex) => loadPartDetail(ex, id, compat, await here(ex), engineId));
 }
 
 /** GET /api/engines/:id: an engine with the parts it is built with, their stock and prices; on a replica where there is one. */
-export function getEngineDetail(ds: DataSource, id: string): Promise<EngineDetailRecord> {
+export function getEngineDetail(ds: DataSource, id: string, here: Here): Promise<EngineDetailRecord> {
   return readOnly(ds, async (ex) => {
+    const hereId = await here(ex);
     const engine = await findEngine(ex, id);
     if (!engine) throw AppError.notFound('Engine');
     const fitments = await engineFitments(ex, id);
     const ids = fitments.map((f) => f.part_id);
     const [rows, stock, prices, specs] = await Promise.all([
       findPartRows(ex, ids),
-      stockOf(ex, ids),
+      stockOf(ex, ids, hereId),
       pricesOf(ex, ids),
       findSpecs(ex, ids),
     ]);
     return {
       engine,
-      fitments: fitments.flatMap((f) => {
-        const row = rows.get(f.part_id);
-        if (!row) return [];
-        return [
-          {
-            row,
-            spec: specs.get(f.part_id),
-            position: f.position,
-            quantity: f.quantity,
-            stock: stock.get(f.part_id) ?? NO_STOCK,
-            prices: prices.get(f.part_id) ?? [],
-          },
-        ];
-      }),
+      fitments: fittedOrder(
+        fitments.flatMap((f) => {
+          const row = rows.get(f.part_id);
+          if (!row) return [];
+          return [
+            {
+              row,
+              spec: specs.get(f.part_id),
+              position: f.position,
+              quantity: f.quantity,
+              stock: stock.get(f.part_id) ?? noStock(hereId),
+              prices: prices.get(f.part_id) ?? [],
+            },
+          ];
+        }),
+      ),
     };
   });
 }

@@ -11,7 +11,8 @@ import { findEngine, fittedPartId } from '../../repositories/engines.repository'
 import { currentSpecPartIds, findPartRows } from '../../repositories/parts.repository';
 import { pricesOf } from '../../repositories/prices.repository';
 import { findSpecs } from '../../repositories/specs.repository';
-import { NO_STOCK, stockOf } from '../../repositories/stock.repository';
+import { inStockHere, noStock, stockOf } from '../../repositories/stock.repository';
+import type { Here } from '../locations.service';
 import { getSettings } from '../settings.service';
 import { asBadRequest } from './compare.service';
 
@@ -20,10 +21,10 @@ import { asBadRequest } from './compare.service';
  * compat-model.md §7 says — every candidate judged against the fitted part on this engine, no-go
  * ones only on request (`all`). Read-only work, on a replica where there is one.
  */
-export async function engineAlternates(ds: DataSource, engineId: string, query: AlternatesQuery): Promise<AlternatesRecord> {
+export async function engineAlternates(ds: DataSource, engineId: string, query: AlternatesQuery, here: Here): Promise<AlternatesRecord> {
   const { compat } = await getSettings(ds);
   const includeNoGo = query.all === '1' || query.all === 'true';
-  return readOnly(ds, (ex) => rankFor(ex, engineId, query.kind, includeNoGo, compat));
+  return readOnly(ds, async (ex) => rankFor(ex, engineId, query.kind, includeNoGo, compat, await here(ex)));
 }
 
 async function rankFor(
@@ -32,6 +33,7 @@ async function rankFor(
   kind: 'coil' | 'plug',
   includeNoGo: boolean,
   settings: CompatSettings,
+  hereId: string | null,
 ): Promise<AlternatesRecord> {
   const engine = await findEngine(ex, engineId);
   if (!engine) throw AppError.notFound('Engine');
@@ -41,7 +43,7 @@ async function rankFor(
   const ids = await currentSpecPartIds(ex, kind, originalId);
   const specs = await findSpecs(ex, [originalId, ...ids]);
   const originalSpec = specs.get(originalId);
-  const [rows, stock, prices] = await Promise.all([findPartRows(ex, [originalId, ...ids]), stockOf(ex, ids), pricesOf(ex, ids)]);
+  const [rows, stock, prices] = await Promise.all([findPartRows(ex, [originalId, ...ids]), stockOf(ex, ids, hereId), pricesOf(ex, ids)]);
   const original = rows.get(originalId)!;
   if (!originalSpec?.coil && !originalSpec?.plug) return { original, alternates: [] };
 
@@ -73,7 +75,16 @@ async function rankFor(
     const result = judge(id);
     if (!result) return [];
     const partPrices = prices.get(id) ?? [];
-    return [{ id, result, inStock: (stock.get(id)?.onHand ?? 0) > 0, priceCents: sellPriceRow(partPrices)?.listCents ?? null, partPrices }];
+    // "In stock" for the ranking is on the shelf here: of two equal alternates, the one the clerk can hand over now.
+    return [
+      {
+        id,
+        result,
+        inStock: inStockHere(stock.get(id) ?? noStock(hereId)),
+        priceCents: sellPriceRow(partPrices)?.listCents ?? null,
+        partPrices,
+      },
+    ];
   });
   const ranked = rankAlternates(candidates, { includeNoGo });
   return {
@@ -83,7 +94,7 @@ async function rankFor(
       verdict: c.result.verdict,
       deviation: c.result.deviation,
       checks: explain(c.id),
-      stock: stock.get(c.id) ?? NO_STOCK,
+      stock: stock.get(c.id) ?? noStock(hereId),
       prices: c.partPrices,
     })),
   };

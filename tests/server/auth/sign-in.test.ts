@@ -24,7 +24,7 @@ describe('sign-in', () => {
       .set('x-csrf-token', token)
       .send({ email: u.email.toUpperCase(), password: TEST_PASSWORD });
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ user: { id: u.id, email: u.email, name: u.name, role: 'clerk', shopId: null } });
+    expect(res.body).toEqual({ user: { id: u.id, email: u.email, name: u.name, role: 'clerk', shopId: null, homeLocationId: null } });
     expect(JSON.stringify(res.body)).not.toContain('password');
     const me = await agent.get('/api/auth/me').expect(200);
     expect(me.body.user.id).toBe(u.id);

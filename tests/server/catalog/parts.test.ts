@@ -37,7 +37,11 @@ describe('parts, engines and vehicles', () => {
 
   it('a clerk sees sell price, stock and bin but no cost or margin field at all', async () => {
     const res = await agents.clerk!.agent.get(`/api/parts/${partId}`).expect(200);
-    expect(res.body.stock).toMatchObject({ inStock: expect.any(Boolean), bin: expect.any(String), onHand: expect.any(Number) });
+    expect(res.body.stock).toMatchObject({
+      inStock: expect.any(Boolean),
+      here: { locationId: expect.any(String), bin: expect.any(String), onHand: expect.any(Number) },
+      elsewhere: expect.any(Array),
+    });
     expect(res.body.prices.length).toBeGreaterThan(0);
     expect(res.body.prices[0].listCents).toBeGreaterThan(0);
     const json = JSON.stringify(res.body);

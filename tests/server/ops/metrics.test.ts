@@ -39,7 +39,7 @@ describe('who may read /metrics', () => {
   });
 
   it('a caller elsewhere needs an admin session: anonymous 401, another role 403', () => {
-    const user = (role: 'admin' | 'clerk') => ({ id: 'u', email: 'e@example.test', name: 'n', role, shopId: null });
+    const user = (role: 'admin' | 'clerk') => ({ id: 'u', email: 'e@example.test', name: 'n', role, shopId: null, homeLocationId: null });
     expect(metricsAccess('127.0.0.1', undefined)).toBe('allowed');
     expect(metricsAccess('192.0.2.9', undefined)).toBe(401);
     expect(metricsAccess('192.0.2.9', user('clerk'))).toBe(403);

@@ -94,7 +94,7 @@ export function ResultsTable({
       column.display({
         id: 'stock',
         header: 'Stock',
-        cell: (c) => <StockNote stock={c.row.original} />,
+        cell: (c) => <StockNote stock={c.row.original.stock ?? { inStock: c.row.original.inStock }} />,
       }),
     ],
     [query],

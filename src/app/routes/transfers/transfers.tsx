@@ -1,0 +1,17 @@
+import { ErrorNote, PageHeader, Panel } from '@/components/ui/panel';
+import { useTransfers } from '@/features/transfers/api/transfers';
+import { TransfersTable } from '@/features/transfers/components/transfers-table';
+
+/** Parts asked of this store by the others, and asked by this store of them. */
+export function TransfersPage() {
+  const transfers = useTransfers();
+  return (
+    <>
+      <PageHeader title="Transfers" />
+      <Panel>
+        <ErrorNote error={transfers.error} />
+        {transfers.data && <TransfersTable transfers={transfers.data.transfers} />}
+      </Panel>
+    </>
+  );
+}
