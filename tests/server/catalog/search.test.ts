@@ -79,13 +79,15 @@ describe('GET /api/search', () => {
     expect(numbers(r.hits)).toEqual(expect.arrayContaining(['QW-IC 3101', 'QW-SP 1406']));
   });
 
-  it('filters plugs by spec facets and reports facet counts', async () => {
-    const r = await search({ kind: 'plug', threadMm: '14', reachMm: '12.7', seat: 'flat', limit: '100' });
+  it('filters plugs by spec facets and reports facet counts when asked', async () => {
+    const r = await search({ kind: 'plug', threadMm: '14', reachMm: '12.7', seat: 'flat', limit: '100', facets: 'true' });
     expect(r.hits.length).toBeGreaterThan(0);
     expect(r.hits.every((h) => h.kind === 'plug')).toBe(true);
     expect(numbers(r.hits)).toContain('QW-SP 1435');
     expect(numbers(r.hits)).not.toContain('QW-SP 1406');
     expect(r.facets.kind).toEqual({ plug: r.total });
+    // Facet counts cost a pass over every match: a search that does not ask gets none.
+    expect((await search({ kind: 'plug', threadMm: '14', limit: '5' })).facets).toEqual({});
   });
 
   it('filters coils by architecture, driver and a primary resistance inside the window', async () => {
