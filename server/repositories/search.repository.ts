@@ -27,7 +27,7 @@ veh AS (
 SELECT p.id, b.name AS brand, p.part_number, p.part_number_norm, p.gtin, p.kind, p.description,
        p.superseded_by_id IS NULL AS current,
        (cs.part_id IS NOT NULL OR ps.part_id IS NOT NULL) AS has_spec,
-       coalesce(s.on_hand, 0) AS on_hand, coalesce(s.bin, '') AS bin,
+       coalesce(s.on_hand, 0) AS on_hand,
        -- A foreign number that points at a superseded part leads on to the current one. Two
        -- index lookups rather than one OR, which would scan the whole interchange table per part.
        ARRAY(SELECT DISTINCT n FROM (
@@ -62,7 +62,6 @@ const documentRowSchema = z.object({
   current: z.boolean(),
   has_spec: z.boolean(),
   on_hand: z.number().int(),
-  bin: z.string(),
   interchange_numbers: texts,
   superseded_numbers: texts,
   engine_codes: texts,
@@ -118,7 +117,6 @@ const exactRowSchema = z.object({
   kind: partKindSchema,
   description: z.string(),
   on_hand: z.number().int(),
-  bin: z.string(),
   has_spec: z.boolean(),
   /** For an interchange match, the foreign part the claim names where the catalog holds it (its verdict's original). */
   original_part_id: z.string().nullable(),
@@ -148,7 +146,7 @@ export function exactNumberRows(ex: Executor, norm: string, limit: number): Prom
           FROM walk w WHERE w.superseded_by_id IS NULL ORDER BY w.id, w.pri, w.depth
       )
       SELECT c.id AS part_id, c.by AS matched_by, c.num AS matched_number, b.name AS brand, p.part_number, p.kind, p.description,
-             coalesce(s.on_hand, 0) AS on_hand, coalesce(s.bin, '') AS bin,
+             coalesce(s.on_hand, 0) AS on_hand,
              (EXISTS (SELECT 1 FROM coil_spec x WHERE x.part_id = p.id) OR EXISTS (SELECT 1 FROM plug_spec y WHERE y.part_id = p.id)) AS has_spec,
              CASE WHEN c.by = 'interchange' THEN (
                SELECT fp.id FROM interchange i JOIN brand fb ON lower(fb.name) = lower(i.foreign_brand)

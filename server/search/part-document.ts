@@ -25,7 +25,6 @@ export interface PartDocument {
   current: boolean;
   hasSpec: boolean;
   onHand: number;
-  bin: string;
   inStock: boolean;
   /** For ranking among equal matches: 2 for a spec, 1 for stock on hand. */
   rankBoost: number;
@@ -129,7 +128,6 @@ function toDocument(r: DocumentRow): PartDocument {
     current: r.current,
     hasSpec: r.has_spec,
     onHand: r.on_hand,
-    bin: r.bin,
     inStock: r.on_hand > 0,
     rankBoost: (r.has_spec ? 2 : 0) + (r.on_hand > 0 ? 1 : 0),
     architecture: r.architecture,
