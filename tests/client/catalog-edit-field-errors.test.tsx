@@ -44,8 +44,9 @@ const detail = (part: PartSummary, spec: unknown) => ({
   spec,
   interchange: [],
   supersession: { supersedes: [], supersededBy: null, current: { id: part.id, partNumber: part.partNumber } },
-  stock: { onHand: 2, bin: 'B-01-1', inStock: true },
+  stock: { inStock: true, here: { locationId: '00000000-0000-4000-8000-0000000000a1', onHand: 2, bin: 'B-01-1' }, elsewhere: [] },
   price: null,
+  sellPriceBasis: null,
   prices: [],
 });
 const BRANDS = {
