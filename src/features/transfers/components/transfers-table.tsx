@@ -42,16 +42,9 @@ export function TransfersTable({ transfers }: { transfers: Transfer[] }) {
           </>
         ),
       }),
-      col.accessor('requestedBy', { header: 'Asked by' }),
-      col.accessor('updatedAt', {
-        id: 'updated',
-        header: 'Last change',
-        enableSorting: true,
-        cell: ({ getValue }) => formatDateTime(getValue()),
-      }),
       col.display({
         id: 'actions',
-        header: () => <span className="sr-only">Next step</span>,
+        header: 'Next step',
         cell: ({ row: { original: t } }) => (
           <span className="flex flex-wrap gap-2">
             {t.steps.map((s) =>
@@ -72,6 +65,13 @@ export function TransfersTable({ transfers }: { transfers: Transfer[] }) {
             )}
           </span>
         ),
+      }),
+      col.accessor('requestedBy', { header: 'Asked by' }),
+      col.accessor('updatedAt', {
+        id: 'updated',
+        header: 'Last change',
+        enableSorting: true,
+        cell: ({ getValue }) => formatDateTime(getValue()),
       }),
     ],
     [mutate, busy],
