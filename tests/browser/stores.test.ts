@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { seriousViolations } from './axe';
 import { openBrowser, signInAs, type BrowserSession } from './browser';
 
 const PHONE = { width: 390, height: 844 };
@@ -33,6 +34,7 @@ describe('the admin’s Stores page', () => {
     const add = page.getByRole('dialog', { name: 'Add a store' });
     await add.getByRole('button', { name: 'Add the store' }).click();
     await add.getByText('Name must not be blank').waitFor();
+    expect(await seriousViolations(page, 'the add-a-store dialog')).toEqual([]);
     const name = `Harbor Lane Saltings ${randomUUID().slice(0, 4)}`;
     await add.getByLabel('Name').fill(name);
     await add.getByLabel('Address').fill('3 Sluice Walk, Port Ellery');
@@ -64,5 +66,29 @@ describe('the admin’s Stores page', () => {
     await page.getByRole('dialog').waitFor({ state: 'detached' });
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBe(PHONE.width);
     await s.shot('stores-phone');
-  });
+  }, 120_000);
+
+  it('shows each person’s home store on the Team page, and the invite form offers the stores', async () => {
+    const page = s.page;
+    await page.setViewportSize(DESK);
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Team', exact: true }).click();
+    await page.getByRole('heading', { name: 'Team', level: 1 }).waitFor();
+    // Seed (seed/users.ts): Casey works at Quayside, Dana at Eastgate; the technician has none.
+    const casey = page.getByLabel('Home store of Casey Clerk');
+    await casey.waitFor();
+    expect(await casey.evaluate((el: HTMLSelectElement) => el.selectedOptions[0]?.textContent)).toBe('Harbor Lane Quayside');
+    expect(await page.getByLabel('Home store of Dana Clerk').evaluate((el: HTMLSelectElement) => el.selectedOptions[0]?.textContent)).toBe(
+      'Harbor Lane Eastgate',
+    );
+    expect(await page.getByLabel('Home store of Toni Tech').count()).toBe(0);
+    const invite = page.getByRole('form', { name: 'Invite a user' });
+    // The admin's own store is chosen first.
+    expect(await invite.getByLabel('Home store').evaluate((el: HTMLSelectElement) => el.selectedOptions[0]?.textContent)).toBe(
+      'Harbor Lane Quayside',
+    );
+    await s.shot('team-desk');
+    await page.setViewportSize(PHONE);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBe(PHONE.width);
+    await s.shot('team-phone');
+  }, 120_000);
 });

@@ -1,5 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { seriousViolations } from './axe';
 import { openBrowser, signInAs, type BrowserSession } from './browser';
 
 // A common phone's CSS viewport (390 × 844) and a wide desk screen.
@@ -39,6 +40,7 @@ const newestRow = (page: Page) => page.getByRole('table', { name: 'Transfers' })
 
 const pageWidth = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth);
 
+// Two browsers and several pages each on a shared machine: each journey gets two minutes.
 describe('transfers between stores: asked from the part panel, answered on the Transfers page', () => {
   let casey: BrowserSession;
   let dana: BrowserSession;
@@ -67,6 +69,7 @@ describe('transfers between stores: asked from the part panel, answered on the T
     await dialog.getByLabel('Quantity').fill('4');
     await dialog.getByRole('button', { name: `Ask ${EASTGATE}` }).click();
     await dialog.getByText('Quantity must be at most 3').waitFor();
+    expect(await seriousViolations(page, 'the ask-another-store dialog')).toEqual([]);
     await casey.shot('transfers-ask-too-many');
     await dialog.getByLabel('Quantity').fill('2');
     await dialog.getByRole('button', { name: `Ask for 2 from ${EASTGATE}` }).click();
@@ -96,6 +99,7 @@ describe('transfers between stores: asked from the part panel, answered on the T
     // The reason is required.
     await refuse.getByRole('button', { name: 'Refuse the request' }).click();
     await refuse.getByText('Reason must not be blank').waitFor();
+    expect(await seriousViolations(other, 'the refuse dialog')).toEqual([]);
     await refuse.getByLabel('Reason').fill('The last ones are set aside for a fleet customer.');
     await dana.shot('transfers-refuse-phone');
     await refuse.getByRole('button', { name: 'Refuse the request' }).click();
@@ -116,7 +120,7 @@ describe('transfers between stores: asked from the part panel, answered on the T
     await second.getByRole('button', { name: 'Mark picked' }).click();
     await second.getByRole('button', { name: 'Mark sent' }).waitFor();
     expect(await second.textContent()).toContain('Picked');
-  });
+  }, 120_000);
 
   it('when the asking store cancels first, the other store’s step is refused in plain words and the list shows the cancel', async () => {
     await askFromPartPanel(casey.page, 1);
@@ -138,5 +142,5 @@ describe('transfers between stores: asked from the part panel, answered on the T
     await danaRow.getByText('Cancelled').waitFor();
     expect(await danaRow.getByRole('button', { name: 'Mark picked' }).count()).toBe(0);
     await dana.shot('transfers-conflict-phone');
-  });
+  }, 120_000);
 });

@@ -83,7 +83,7 @@ export function TeamTable({ users, selfId, stores }: TeamTableProps) {
                 id={`home-${u.id}`}
                 value={(moving?.id === u.id ? moving.homeLocationId : u.homeLocationId) ?? ''}
                 onChange={(e) => mutate({ id: u.id, homeLocationId: e.target.value })}
-                className="max-w-48 rounded border border-ink/20 bg-paper-raised px-2 py-1"
+                className="rounded border border-ink/20 bg-paper-raised px-2 py-1"
               >
                 {u.homeLocationId === null && <option value="">—</option>}
                 {stores.map((l) => (
