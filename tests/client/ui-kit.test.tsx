@@ -194,6 +194,31 @@ describe('DataTable: pages, row headers, server sorting', () => {
     expect(asked.at(-1)).toBe('number asc');
     expect(screen.getByRole('columnheader', { name: /Number/ }).getAttribute('aria-sort')).toBe('ascending');
   });
+
+  it('useServerSorting turns a fallback on a number column (which TanStack starts descending) both ways', () => {
+    const asked: string[] = [];
+    function ByStock() {
+      const s = useServerSorting(['number', 'onHand'] as const, { id: 'onHand', desc: false });
+      asked.push(`${s.sort} ${s.dir}`);
+      return (
+        <DataTable
+          label="Parts"
+          data={ROWS}
+          columns={SORTABLE}
+          getRowId={(r) => r.id}
+          sorting={s.sorting}
+          onSortingChange={s.onSortingChange}
+        />
+      );
+    }
+    render(<ByStock />);
+    const onHand = () => within(screen.getByRole('columnheader', { name: /On hand/ })).getByRole('button');
+    expect(asked.at(-1)).toBe('onHand asc');
+    fireEvent.click(onHand());
+    expect(asked.at(-1)).toBe('onHand desc');
+    fireEvent.click(onHand());
+    expect(asked.at(-1)).toBe('onHand asc');
+  });
 });
 
 describe('Tabs and Sheet', () => {
