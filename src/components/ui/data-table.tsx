@@ -85,13 +85,13 @@ const STEP: Record<string, number> = { ArrowDown: 1, ArrowUp: -1, PageDown: 10, 
 
 const ARIA_SORT = { asc: 'ascending', desc: 'descending' } as const;
 
-function HeaderCell<T>({ header }: { header: Header<T, unknown> }) {
+function HeaderCell<T>({ header, compact }: { header: Header<T, unknown>; compact: boolean }) {
   const column = header.column;
   const align = column.columnDef.meta?.align === 'right' ? 'text-right' : '';
   const content = header.isPlaceholder ? null : flexRender(column.columnDef.header, header.getContext());
   if (!column.getCanSort())
     return (
-      <th scope="col" className={`px-2 py-2 font-semibold whitespace-nowrap ${align}`}>
+      <th scope="col" className={`px-2 py-2 font-semibold whitespace-nowrap ${compact ? 'first:pl-0 last:pr-0' : ''} ${align}`}>
         {content}
       </th>
     );
@@ -212,7 +212,7 @@ export function DataTable<T>({
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((h) => (
-                <HeaderCell key={h.id} header={h} />
+                <HeaderCell key={h.id} header={h} compact={compact} />
               ))}
             </tr>
           ))}
@@ -252,7 +252,7 @@ export function DataTable<T>({
                     <Cell
                       key={cell.id}
                       {...(meta?.rowHeader ? { scope: 'row' } : grid ? { role: 'gridcell' } : {})}
-                      className={`${compact ? 'px-1.5 py-0.5' : 'px-2 py-1.5'} ${meta?.rowHeader ? 'font-medium' : ''} ${
+                      className={`${compact ? 'px-1.5 py-0.5 first:pl-0 last:pr-0' : 'px-2 py-1.5'} ${meta?.rowHeader ? 'font-medium' : ''} ${
                         meta?.align === 'right' ? 'text-right tabular-nums' : ''
                       } ${meta?.cellClassName ?? ''}`}
                     >
