@@ -9,7 +9,7 @@ type ChangeLine = Change & { key: string };
 
 const col = createColumnHelper<ChangeLine>();
 const COLUMNS = [
-  col.accessor('what', { header: 'Field', meta: { rowHeader: true, cellClassName: 'w-0 pr-4 whitespace-nowrap text-ink-soft' } }),
+  col.accessor('what', { header: 'Field', meta: { rowHeader: true, cellClassName: 'pr-4 text-ink-soft sm:w-0 sm:whitespace-nowrap' } }),
   col.accessor('from', {
     header: 'Was',
     cell: (c) => (c.getValue() === '—' ? null : c.getValue()),
@@ -27,7 +27,8 @@ const COLUMNS = [
         {c.to}
       </>
     ),
-    meta: { cellClassName: 'font-medium text-ink tabular-nums' },
+    // A long name or number breaks anywhere rather than pushing the note wider than a phone.
+    meta: { cellClassName: 'font-medium text-ink tabular-nums wrap-anywhere' },
   }),
 ];
 
