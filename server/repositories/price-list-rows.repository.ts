@@ -1,5 +1,11 @@
 import { z } from 'zod';
-import { SUPERSESSION_STATES, type PriceListChangesQuery, type PriceListErrorsQuery } from '../../shared/schemas/price-lists';
+import {
+  SUPERSESSION_STATES,
+  type PriceListChangeSort,
+  type PriceListChangesQuery,
+  type PriceListErrorSort,
+  type PriceListErrorsQuery,
+} from '../../shared/schemas/price-lists';
 import { execute, queryCount, queryIds, queryRows, type Executor } from '../db/executor';
 import { partKindSchema } from './parts.repository';
 
@@ -37,7 +43,20 @@ const CHANGE_COLUMNS = `line, change, part_id, part_number, brand, description, 
   (coil IS NOT NULL OR plug IS NOT NULL) AS has_spec, supersedes, supersession,
   (SELECT p.part_number FROM part p WHERE p.id = price_list_row.part_id) AS catalog_number`;
 
-/** Rows of the preview tables, in file order, with the count of all that match. */
+// The query schema allows only these keys; each names its SQL here, so nothing from the query
+// string reaches the statement. Ties go in file order; a row without a move sorts last either way.
+const CHANGE_ORDER: Record<PriceListChangeSort, string> = {
+  line: 'line',
+  partNumber: 'part_number_norm',
+  cost: 'cost_cents',
+  list: 'list_cents',
+  costChange: 'cost_change_pct',
+  listChange: 'list_change_pct',
+};
+const ERROR_ORDER: Record<PriceListErrorSort, string> = { line: 'line', column: '"column"' };
+const DIRECTION = { asc: 'ASC', desc: 'DESC' } as const;
+
+/** Rows of the preview tables, sorted as asked (file order by default), with the count of all that match. */
 export async function listChangeRows(
   ex: Executor,
   listId: string,
@@ -56,7 +75,9 @@ export async function listChangeRows(
   const rows = await queryRows(
     ex,
     changeRowSchema,
-    `SELECT ${CHANGE_COLUMNS} FROM price_list_row WHERE ${where} ORDER BY line LIMIT ${q.limit} OFFSET ${q.offset}`,
+    `SELECT ${CHANGE_COLUMNS} FROM price_list_row WHERE ${where}
+      ORDER BY ${CHANGE_ORDER[q.sort]} ${DIRECTION[q.dir]} NULLS LAST, line
+      LIMIT ${q.limit} OFFSET ${q.offset}`,
     params,
   );
   return { rows, total: await queryCount(ex, `SELECT count(*)::int AS n FROM price_list_row WHERE ${where}`, params) };
@@ -78,7 +99,8 @@ export async function listRowErrorRows(
   const rows = await queryRows(
     ex,
     rowErrorRowSchema,
-    `SELECT line, "column", field, message FROM price_list_row_error WHERE price_list_id = $1 ORDER BY line, id LIMIT $2 OFFSET $3`,
+    `SELECT line, "column", field, message FROM price_list_row_error WHERE price_list_id = $1
+      ORDER BY ${ERROR_ORDER[q.sort]} ${DIRECTION[q.dir]} NULLS LAST, line, id LIMIT $2 OFFSET $3`,
     [listId, q.limit, q.offset],
   );
   return { rows, total: await queryCount(ex, `SELECT count(*)::int AS n FROM price_list_row_error WHERE price_list_id = $1`, [listId]) };

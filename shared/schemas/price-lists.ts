@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { DELIMITERS } from '../price-list/delimiters';
 import { mappingSchema } from '../price-list/mapping';
-import { limitQuerySchema, offsetQuerySchema, timestampSchema, uuidSchema } from './common';
+import { limitQuerySchema, offsetQuerySchema, sortDirQuerySchema, timestampSchema, uuidSchema } from './common';
 import { counterPricesSchema } from './sell-price';
 import { fileText } from './text';
 
@@ -44,16 +44,34 @@ const limitSchema = limitQuerySchema(1000, 100);
 export const PRICE_LIST_CHANGE_TYPES = ['new', 'changed', 'unchanged', 'supersession'] as const;
 export type PriceListChangeType = (typeof PRICE_LIST_CHANGE_TYPES)[number];
 
+/**
+ * What the preview tables sort by: file line, part number, the new cost or list price, or the
+ * size of its move in percent. Ties, and the default, go in file order.
+ */
+export const PRICE_LIST_CHANGE_SORTS = ['line', 'partNumber', 'cost', 'list', 'costChange', 'listChange'] as const;
+export type PriceListChangeSort = (typeof PRICE_LIST_CHANGE_SORTS)[number];
+
 export const priceListChangesQuerySchema = z.object({
   type: z.enum(PRICE_LIST_CHANGE_TYPES).optional(),
   /** Only the moves above the threshold. */
   flagged: z.enum(['true', 'false']).optional(),
+  sort: z.enum(PRICE_LIST_CHANGE_SORTS).default('line'),
+  dir: sortDirQuerySchema,
   offset: offsetSchema,
   limit: limitSchema,
 });
 export type PriceListChangesQuery = z.infer<typeof priceListChangesQuerySchema>;
 
-export const priceListErrorsQuerySchema = z.object({ offset: offsetSchema, limit: limitSchema });
+/** The rejected rows sort by file line or by the column that was wrong; ties in file order. */
+export const PRICE_LIST_ERROR_SORTS = ['line', 'column'] as const;
+export type PriceListErrorSort = (typeof PRICE_LIST_ERROR_SORTS)[number];
+
+export const priceListErrorsQuerySchema = z.object({
+  sort: z.enum(PRICE_LIST_ERROR_SORTS).default('line'),
+  dir: sortDirQuerySchema,
+  offset: offsetSchema,
+  limit: limitSchema,
+});
 export type PriceListErrorsQuery = z.infer<typeof priceListErrorsQuerySchema>;
 
 export const priceListHistoryQuerySchema = z.object({

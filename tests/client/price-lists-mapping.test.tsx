@@ -69,6 +69,16 @@ describe('mapping table', () => {
     expect(screen.queryByRole('alert')).toBeNull();
   });
 
+  it('keeps a select, and the keyboard in it, when a field is chosen', () => {
+    render(<Harness columns={OTHER_LAYOUT} initial={guessMapping(OTHER_LAYOUT)} />);
+    const retail = select('Retail');
+    retail.focus();
+    fireEvent.change(retail, { target: { value: 'core' } });
+    expect(select('Retail')).toBe(retail);
+    expect(document.activeElement).toBe(retail);
+    expect(retail.value).toBe('core');
+  });
+
   it('keys a column without a header by its index', () => {
     const columns = ['Part Number', 'Brand', '', 'Cost', 'List'];
     const onChange = vi.fn();

@@ -8,6 +8,7 @@ import { specField } from '@shared/spec-fields';
 import { Button } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
 import { Field, Form, useResultIsCurrent, useSchemaForm } from '@/components/ui/form';
+import { useServerSorting } from '@/components/ui/server-sorting';
 import { Sheet } from '@/components/ui/sheet';
 import { Tabs } from '@/components/ui/tabs';
 
@@ -76,6 +77,10 @@ const COLUMNS = [
   col.accessor('number', { header: 'Number' }),
   col.accessor('onHand', { header: 'On hand', enableSorting: true, meta: { align: 'right' } }),
 ];
+const SORTABLE = [
+  col.accessor('number', { header: 'Number', enableSorting: true }),
+  col.accessor('onHand', { header: 'On hand', enableSorting: true, meta: { align: 'right' } }),
+];
 
 describe('DataTable', () => {
   it('says so when there are no rows', () => {
@@ -110,6 +115,109 @@ describe('DataTable', () => {
     fireEvent.keyDown(rows[2]!, { key: 'Home' });
     fireEvent.keyDown(rows[0]!, { key: 'ArrowUp' });
     expect(onLeaveTop).toHaveBeenCalledTimes(1);
+  });
+});
+
+describe('DataTable: pages, row headers, server sorting', () => {
+  // 60 rows numbered 1…60, stock falling as the number rises.
+  const MANY: Row[] = Array.from({ length: 60 }, (_, i) => ({ id: `r${i + 1}`, number: `N-${i + 1}`, onHand: 60 - i }));
+  const bodyRows = () =>
+    within(screen.getByRole('table', { name: 'Parts' }))
+      .getAllByRole('row')
+      .slice(1);
+  const firstCells = () => bodyRows().map((r) => within(r).getAllByRole('cell')[0]!.textContent);
+
+  it('with pageSize, shows one page and the one Pager; a new sort order starts from the first page and sorts every row', () => {
+    render(<DataTable label="Parts" data={MANY} columns={COLUMNS} getRowId={(r) => r.id} pageSize={25} />);
+    expect(bodyRows()).toHaveLength(25);
+    expect(screen.getByText('Rows 1–25 of 60')).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Next' }));
+    fireEvent.click(screen.getByRole('button', { name: 'Next' }));
+    expect(firstCells()).toEqual(MANY.slice(50).map((r) => r.number));
+    expect(screen.getByText('Rows 51–60 of 60')).toBeTruthy();
+    // On hand ascending: the last-numbered rows have the least, and they fill page one.
+    const onHand = () => screen.getByRole('columnheader', { name: /On hand/ });
+    for (let i = 0; i < 3 && onHand().getAttribute('aria-sort') !== 'ascending'; i++) fireEvent.click(within(onHand()).getByRole('button'));
+    expect(onHand().getAttribute('aria-sort')).toBe('ascending');
+    expect(screen.getByText('Rows 1–25 of 60')).toBeTruthy();
+    expect(firstCells()).toEqual(
+      MANY.slice(35)
+        .reverse()
+        .map((r) => r.number),
+    );
+  });
+
+  it('keeps the page when the rows are reloaded, and goes to the last page when the list shrank below it', () => {
+    const { rerender } = render(<DataTable label="Parts" data={MANY} columns={COLUMNS} getRowId={(r) => r.id} pageSize={25} />);
+    fireEvent.click(screen.getByRole('button', { name: 'Next' }));
+    rerender(<DataTable label="Parts" data={[...MANY]} columns={COLUMNS} getRowId={(r) => r.id} pageSize={25} />);
+    expect(firstCells()[0]).toBe('N-26');
+    rerender(<DataTable label="Parts" data={MANY.slice(0, 20)} columns={COLUMNS} getRowId={(r) => r.id} pageSize={25} />);
+    expect(firstCells()[0]).toBe('N-1');
+    expect(screen.queryByRole('button', { name: 'Next' })).toBeNull();
+  });
+
+  it('makes a column of row headers, and keeps hidden column names for screen readers', () => {
+    const headed = [col.accessor('number', { header: 'Number', meta: { rowHeader: true } }), col.accessor('onHand', { header: 'On hand' })];
+    render(<DataTable label="Parts" data={ROWS} columns={headed} getRowId={(r) => r.id} hideHeader />);
+    const header = screen.getByRole('rowheader', { name: 'QW-SP 1406' });
+    expect(header.getAttribute('scope')).toBe('row');
+    expect(screen.getByRole('columnheader', { name: 'On hand' }).closest('thead')?.className).toContain('sr-only');
+  });
+
+  it('useServerSorting turns the header clicks into sort and dir, and a third click goes back to the fallback', () => {
+    const asked: string[] = [];
+    function ServerSorted() {
+      const s = useServerSorting(['number', 'onHand'] as const, { id: 'number', desc: false });
+      asked.push(`${s.sort} ${s.dir}`);
+      // The rows arrive as the server sorted them; here they stay as given.
+      return (
+        <DataTable
+          label="Parts"
+          data={ROWS}
+          columns={SORTABLE}
+          getRowId={(r) => r.id}
+          sorting={s.sorting}
+          onSortingChange={s.onSortingChange}
+        />
+      );
+    }
+    render(<ServerSorted />);
+    expect(asked.at(-1)).toBe('number asc');
+    expect(firstCells()).toEqual(ROWS.map((r) => r.number));
+    fireEvent.click(screen.getByRole('button', { name: /On hand/ }));
+    const first = asked.at(-1);
+    expect(first === 'onHand desc' || first === 'onHand asc').toBe(true);
+    fireEvent.click(screen.getByRole('button', { name: /On hand/ }));
+    expect(asked.at(-1)).toBe(first === 'onHand desc' ? 'onHand asc' : 'onHand desc');
+    fireEvent.click(screen.getByRole('button', { name: /On hand/ }));
+    expect(asked.at(-1)).toBe('number asc');
+    expect(screen.getByRole('columnheader', { name: /Number/ }).getAttribute('aria-sort')).toBe('ascending');
+  });
+
+  it('useServerSorting turns a fallback on a number column (which TanStack starts descending) both ways', () => {
+    const asked: string[] = [];
+    function ByStock() {
+      const s = useServerSorting(['number', 'onHand'] as const, { id: 'onHand', desc: false });
+      asked.push(`${s.sort} ${s.dir}`);
+      return (
+        <DataTable
+          label="Parts"
+          data={ROWS}
+          columns={SORTABLE}
+          getRowId={(r) => r.id}
+          sorting={s.sorting}
+          onSortingChange={s.onSortingChange}
+        />
+      );
+    }
+    render(<ByStock />);
+    const onHand = () => within(screen.getByRole('columnheader', { name: /On hand/ })).getByRole('button');
+    expect(asked.at(-1)).toBe('onHand asc');
+    fireEvent.click(onHand());
+    expect(asked.at(-1)).toBe('onHand desc');
+    fireEvent.click(onHand());
+    expect(asked.at(-1)).toBe('onHand asc');
   });
 });
 

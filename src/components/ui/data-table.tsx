@@ -1,6 +1,7 @@
 import {
   flexRender,
   getCoreRowModel,
+  getPaginationRowModel,
   getSortedRowModel,
   useReactTable,
   type Header,
@@ -11,12 +12,17 @@ import {
   type VisibilityState,
 } from '@tanstack/react-table';
 import { useImperativeHandle, useRef, useState, type KeyboardEvent, type ReactNode, type Ref } from 'react';
+import { Pager } from './pager';
 
 /**
  * Every table of the app: TanStack Table for the rows and columns, this file for the markup.
  * Columns are TanStack column definitions (createColumnHelper); a column sorts only when it says
  * `enableSorting: true`. On a narrow screen the table scrolls sideways inside its own labelled
  * region, so the page never gets wider than the phone.
+ *
+ * A function `cell` is rendered as a component (TanStack's flexRender): give the columns a stable
+ * identity (module level or useMemo), or a cell's input is mounted afresh on every render and
+ * loses the focus. An editable cell reads what changes (handlers, errors) from its row or a context.
  */
 
 declare module '@tanstack/react-table' {
@@ -26,6 +32,8 @@ declare module '@tanstack/react-table' {
     align?: 'right';
     /** Classes for the column's cells (not its header). */
     cellClassName?: string;
+    /** The column names its row (a field's name beside its values): its cells are row headers. */
+    rowHeader?: boolean;
   }
 }
 
@@ -49,6 +57,15 @@ export interface DataTableProps<T> {
   onSortingChange?: OnChangeFn<SortingState>;
   columnVisibility?: VisibilityState;
   /**
+   * Rows the table holds all of, shown this many at a time with the kit's Pager under them
+   * (sorting covers every row). Rows the server pages take a Pager of their own instead.
+   */
+  pageSize?: number;
+  /** Column names for screen readers only, where the rows speak for themselves (a short note). */
+  hideHeader?: boolean;
+  /** Smaller text, tighter rows, no rules between them: a table inside a note or a form. */
+  compact?: boolean;
+  /**
    * Makes the rows a keyboard grid: one tab stop (the selected row), ↑/↓, PageUp/PageDown,
    * Home/End move the selection, Enter, Space or a click open the row.
    */
@@ -68,13 +85,13 @@ const STEP: Record<string, number> = { ArrowDown: 1, ArrowUp: -1, PageDown: 10, 
 
 const ARIA_SORT = { asc: 'ascending', desc: 'descending' } as const;
 
-function HeaderCell<T>({ header }: { header: Header<T, unknown> }) {
+function HeaderCell<T>({ header, compact }: { header: Header<T, unknown>; compact: boolean }) {
   const column = header.column;
   const align = column.columnDef.meta?.align === 'right' ? 'text-right' : '';
   const content = header.isPlaceholder ? null : flexRender(column.columnDef.header, header.getContext());
   if (!column.getCanSort())
     return (
-      <th scope="col" className={`px-2 py-2 font-semibold whitespace-nowrap ${align}`}>
+      <th scope="col" className={`px-2 py-2 font-semibold whitespace-nowrap ${compact ? 'first:pl-0 last:pr-0' : ''} ${align}`}>
         {content}
       </th>
     );
@@ -105,6 +122,9 @@ export function DataTable<T>({
   sorting,
   onSortingChange,
   columnVisibility,
+  pageSize,
+  hideHeader = false,
+  compact = false,
   onRowOpen,
   openRowId = null,
   onLeaveTop,
@@ -114,16 +134,30 @@ export function DataTable<T>({
 }: DataTableProps<T>) {
   const [ownSorting, setOwnSorting] = useState<SortingState>(initialSorting);
   const manual = sorting !== undefined;
+  // The page is kept here rather than reset by TanStack on new data: a row retried or revoked
+  // reloads the list, and the reader stays on the page they were reading (the last one if it shrank).
+  const [pageIndex, setPageIndex] = useState(0);
+  const pageCount = pageSize ? Math.max(1, Math.ceil(data.length / pageSize)) : 1;
+  const page = Math.min(pageIndex, pageCount - 1);
   const table = useReactTable({
     data,
     columns,
     getRowId: (row) => getRowId(row),
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
+    ...(pageSize ? { getPaginationRowModel: getPaginationRowModel(), autoResetPageIndex: false } : {}),
     manualSorting: manual,
     defaultColumn: { enableSorting: false },
-    state: { sorting: sorting ?? ownSorting, ...(columnVisibility ? { columnVisibility } : {}) },
-    onSortingChange: onSortingChange ?? setOwnSorting,
+    state: {
+      sorting: sorting ?? ownSorting,
+      ...(columnVisibility ? { columnVisibility } : {}),
+      ...(pageSize ? { pagination: { pageIndex: page, pageSize } } : {}),
+    },
+    onSortingChange: (update) => {
+      // A new order starts from its first page.
+      setPageIndex(0);
+      (onSortingChange ?? setOwnSorting)(update);
+    },
   });
   const rows = table.getRowModel().rows;
 
@@ -165,20 +199,20 @@ export function DataTable<T>({
   if (rows.length === 0) return <p className="py-3 text-[15px] text-ink-soft">{empty}</p>;
 
   const grid = onRowOpen !== undefined;
-  return (
+  const region = (
     // The region scrolls on a narrow screen; it takes the focus so a keyboard can scroll it too.
     // It is positioned so that visually hidden (absolute) labels inside stay inside its scroll.
     <div role="region" aria-label={label} tabIndex={0} className="relative max-w-full overflow-x-auto">
       <table
         aria-label={label}
         {...(grid ? { role: 'grid', 'aria-rowcount': rows.length + 1 } : {})}
-        className="w-full border-collapse text-left text-[15px]"
+        className={`w-full border-collapse text-left ${compact ? 'text-sm' : 'text-[15px]'}`}
       >
-        <thead className="border-b border-ink/15 text-xs uppercase tracking-wide text-ink-soft">
+        <thead className={hideHeader ? 'sr-only' : 'border-b border-ink/15 text-xs uppercase tracking-wide text-ink-soft'}>
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((h) => (
-                <HeaderCell key={h.id} header={h} />
+                <HeaderCell key={h.id} header={h} compact={compact} />
               ))}
             </tr>
           ))}
@@ -207,20 +241,23 @@ export function DataTable<T>({
                   : {})}
                 {...rowData?.(row.original)}
                 aria-current={isOpen || undefined}
-                className={`border-b border-ink/5 align-top ${
+                className={`${compact ? '' : 'border-b border-ink/5'} align-top ${
                   grid ? `cursor-pointer outline-offset-[-3px] ${isSelected ? 'bg-accent-soft' : 'hover:bg-paper-sunk'}` : ''
                 } ${isOpen ? 'shadow-[inset_4px_0_0_0_#0f6b6b]' : ''} ${rowClassName?.(row.original) ?? ''}`}
               >
                 {row.getVisibleCells().map((cell) => {
                   const meta = cell.column.columnDef.meta;
+                  const Cell = meta?.rowHeader ? 'th' : 'td';
                   return (
-                    <td
+                    <Cell
                       key={cell.id}
-                      {...(grid ? { role: 'gridcell' } : {})}
-                      className={`px-2 py-1.5 ${meta?.align === 'right' ? 'text-right tabular-nums' : ''} ${meta?.cellClassName ?? ''}`}
+                      {...(meta?.rowHeader ? { scope: 'row' } : grid ? { role: 'gridcell' } : {})}
+                      className={`${compact ? 'px-1.5 py-0.5 first:pl-0 last:pr-0' : 'px-2 py-1.5'} ${meta?.rowHeader ? 'font-medium' : ''} ${
+                        meta?.align === 'right' ? 'text-right tabular-nums' : ''
+                      } ${meta?.cellClassName ?? ''}`}
                     >
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </td>
+                    </Cell>
                   );
                 })}
               </tr>
@@ -229,5 +266,17 @@ export function DataTable<T>({
         </tbody>
       </table>
     </div>
+  );
+  if (!pageSize) return region;
+  return (
+    <>
+      {region}
+      <Pager
+        offset={page * pageSize}
+        limit={pageSize}
+        total={data.length}
+        onOffset={(offset) => setPageIndex(Math.floor(offset / pageSize))}
+      />
+    </>
   );
 }

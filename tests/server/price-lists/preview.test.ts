@@ -99,6 +99,25 @@ describe('preview of the sample files', () => {
       expect(flagged.map((c) => c.partNumber)).toEqual(['NR/IR 2208']);
     });
 
+    it('sorts a table by the size of a move or by number, ties in file order, and refuses a column it does not sort by', async () => {
+      const byMove = await changesOf(buyer, list.id, { type: 'changed', sort: 'costChange', dir: 'desc' });
+      expect(byMove.map((c) => [c.partNumber, c.costChangePct])).toEqual([
+        ['NR/IR 2208', 18.8],
+        ['QW-SP 1406', 4.8],
+        ['QW-IC 3101', 2.9],
+        ['QW-SP 1017', 0],
+        ['QW-CP 5202', -2.6],
+      ]);
+      const byNumber = await changesOf(buyer, list.id, { type: 'changed', sort: 'partNumber' });
+      expect(byNumber.map((c) => c.partNumber)).toEqual(['NR/IR 2208', 'QW-CP 5202', 'QW-IC 3101', 'QW-SP 1017', 'QW-SP 1406']);
+      const lastLines = await changesOf(buyer, list.id, { type: 'unchanged', sort: 'line', dir: 'desc', limit: '3' });
+      const unchangedLines = (await changesOf(buyer, list.id, { type: 'unchanged' })).map((c) => c.line);
+      expect(lastLines.map((c) => c.line)).toEqual(unchangedLines.slice(-3).reverse());
+      const bad = await buyer.agent.get(`/api/price-lists/${list.id}/changes`).query({ sort: 'sha256' });
+      expect(bad.status).toBe(400);
+      expect(bad.body.error.details[0].field).toBe('sort');
+    });
+
     it('lists the new numbers, each without a spec, and the supersession', async () => {
       const added = await changesOf(buyer, list.id, { type: 'new' });
       expect(added.map((c) => [c.partNumber, c.partId, c.specStored])).toEqual(NEW_NUMBERS.map((n) => [fresh(n), null, false]));
@@ -166,6 +185,29 @@ describe('preview of the sample files', () => {
       [6, 'List'],
       [8, 'GTIN'],
       [10, 'Kind'],
+      [12, 'Part Number'],
+      [15, 'Part Number'],
+    ]);
+    const errorsBy = async (query: Record<string, string>) =>
+      ((await buyer.agent.get(`/api/price-lists/${list.id}/errors`).query(query).expect(200)).body as PriceListErrors).errors.map((e) => [
+        e.line,
+        e.column,
+      ]);
+    expect(await errorsBy({ sort: 'line', dir: 'desc' })).toEqual([
+      [15, 'Part Number'],
+      [12, 'Part Number'],
+      [10, 'Kind'],
+      [8, 'GTIN'],
+      [6, 'List'],
+      [5, 'Part Number'],
+      [4, 'Cost'],
+    ]);
+    expect(await errorsBy({ sort: 'column' })).toEqual([
+      [4, 'Cost'],
+      [8, 'GTIN'],
+      [10, 'Kind'],
+      [6, 'List'],
+      [5, 'Part Number'],
       [12, 'Part Number'],
       [15, 'Part Number'],
     ]);

@@ -1,6 +1,8 @@
+import { createColumnHelper } from '@tanstack/react-table';
 import { useState } from 'react';
 import type { ApiKey } from '@shared/schemas/api-keys';
 import { Button } from '@/components/ui/button';
+import { DataTable } from '@/components/ui/data-table';
 import { ErrorNote } from '@/components/ui/panel';
 import { useRevokeApiKey } from '../api/revoke-api-key';
 import { formatDateTime } from '@shared/format';
@@ -32,37 +34,51 @@ function RevokeButton({ apiKey }: { apiKey: ApiKey }) {
   );
 }
 
+const col = createColumnHelper<ApiKey>();
+// A moment as a number to sort by; a key never used sorts last either way.
+const time = (key: 'createdAt' | 'lastUsedAt', header: string) =>
+  col.accessor((k) => (k[key] ? Date.parse(k[key]) : undefined), {
+    id: key,
+    header,
+    enableSorting: true,
+    sortUndefined: 'last',
+    cell: ({ row: { original: k } }) => (
+      <>
+        {when(k[key])}
+        {key === 'createdAt' && k.createdBy && ` by ${k.createdBy.name}`}
+      </>
+    ),
+    meta: { cellClassName: 'text-ink-soft' },
+  });
+
+// The cells keep no handlers of the table's, so the columns stay at module level; the revoke
+// button holds its own question and mutation.
+const COLUMNS = [
+  col.accessor('name', { header: 'Name', enableSorting: true, meta: { cellClassName: 'font-medium' } }),
+  col.accessor('scope', { header: 'Scope', enableSorting: true }),
+  col.accessor('prefix', { header: 'Key', cell: (c) => `${c.getValue()}…`, meta: { cellClassName: 'font-mono text-sm text-ink-soft' } }),
+  time('createdAt', 'Created'),
+  time('lastUsedAt', 'Last used'),
+  col.display({
+    id: 'revoke',
+    header: () => <span className="sr-only">Status</span>,
+    meta: { align: 'right' },
+    cell: ({ row: { original: k } }) =>
+      k.revokedAt ? <span className="text-nogo">revoked {when(k.revokedAt)}</span> : <RevokeButton apiKey={k} />,
+  }),
+];
+
+/** Revoked keys stay listed with the day they stopped working; newest first, so a new key is on the first page. */
 export function KeyTable({ apiKeys }: { apiKeys: ApiKey[] }) {
-  if (apiKeys.length === 0) return <p className="text-sm text-ink-soft">No API keys yet.</p>;
   return (
-    <table className="w-full text-left text-[15px]">
-      <thead className="border-b border-ink/10 text-xs uppercase tracking-wide text-ink-soft">
-        <tr>
-          <th className="py-2 pr-3">Name</th>
-          <th className="py-2 pr-3">Scope</th>
-          <th className="py-2 pr-3">Key</th>
-          <th className="py-2 pr-3">Created</th>
-          <th className="py-2 pr-3">Last used</th>
-          <th className="py-2" />
-        </tr>
-      </thead>
-      <tbody>
-        {apiKeys.map((k) => (
-          <tr key={k.id} className="border-b border-ink/5">
-            <td className="py-2 pr-3 font-medium">{k.name}</td>
-            <td className="py-2 pr-3">{k.scope}</td>
-            <td className="py-2 pr-3 font-mono text-sm text-ink-soft">{k.prefix}…</td>
-            <td className="py-2 pr-3 text-ink-soft">
-              {when(k.createdAt)}
-              {k.createdBy && ` by ${k.createdBy.name}`}
-            </td>
-            <td className="py-2 pr-3 text-ink-soft">{when(k.lastUsedAt)}</td>
-            <td className="py-2 text-right">
-              {k.revokedAt ? <span className="text-nogo">revoked {when(k.revokedAt)}</span> : <RevokeButton apiKey={k} />}
-            </td>
-          </tr>
-        ))}
-      </tbody>
-    </table>
+    <DataTable
+      label="API keys"
+      data={apiKeys}
+      columns={COLUMNS}
+      getRowId={(k) => k.id}
+      initialSorting={[{ id: 'createdAt', desc: true }]}
+      pageSize={25}
+      empty="No API keys yet."
+    />
   );
 }

@@ -1,6 +1,36 @@
+import { createColumnHelper } from '@tanstack/react-table';
 import type { ReactNode } from 'react';
-import type { Change } from '../changes';
 import { formatTime } from '@shared/format';
+import { DataTable } from '@/components/ui/data-table';
+import type { Change } from '../changes';
+
+// The same field may change twice in one save (two rows added): the position keeps rows apart.
+type ChangeLine = Change & { key: string };
+
+const col = createColumnHelper<ChangeLine>();
+const COLUMNS = [
+  col.accessor('what', { header: 'Field', meta: { rowHeader: true, cellClassName: 'pr-4 text-ink-soft sm:w-0 sm:whitespace-nowrap' } }),
+  col.accessor('from', {
+    header: 'Was',
+    cell: (c) => (c.getValue() === '—' ? null : c.getValue()),
+    meta: { cellClassName: 'w-0 whitespace-nowrap text-ink-soft tabular-nums' },
+  }),
+  col.accessor('to', {
+    header: 'Now',
+    cell: ({ row: { original: c }, table }) => (
+      <>
+        {table.getColumn('from')?.getIsVisible() && c.from !== '—' && (
+          <span aria-hidden className="mr-1.5 text-ink-faint">
+            →
+          </span>
+        )}
+        {c.to}
+      </>
+    ),
+    // A long name or number breaks anywhere rather than pushing the note wider than a phone.
+    meta: { cellClassName: 'font-medium text-ink tabular-nums wrap-anywhere' },
+  }),
+];
 
 /** What the last save changed, field by field, so the buyer sees the catalog took it. */
 export function ChangeNote({
@@ -16,6 +46,7 @@ export function ChangeNote({
 }) {
   // A part or row just added has no "was": two columns read easier than an empty one.
   const allNew = changes.every((c) => c.from === '—');
+  const lines = changes.map((c, i) => ({ ...c, key: `${c.what}-${i}` }));
   return (
     <div role="status" className="rounded-md border border-go/30 bg-go-soft/60 px-3 py-2 text-[15px]">
       <p className="font-semibold text-go">
@@ -24,33 +55,17 @@ export function ChangeNote({
       {changes.length === 0 ? (
         <p className="text-ink-soft">Nothing differed from what was on file.</p>
       ) : (
-        <table className="mt-1 w-full text-left text-sm">
-          <thead className="sr-only">
-            <tr>
-              <th>Field</th>
-              {!allNew && <th>Was</th>}
-              <th>Now</th>
-            </tr>
-          </thead>
-          <tbody>
-            {changes.map((c, i) => (
-              <tr key={`${c.what}-${i}`} className="align-baseline">
-                <th scope="row" className="w-0 py-0.5 pr-4 font-medium whitespace-nowrap text-ink-soft">
-                  {c.what}
-                </th>
-                {!allNew && <td className="w-0 py-0.5 pr-2 whitespace-nowrap text-ink-soft tabular-nums">{c.from !== '—' && c.from}</td>}
-                <td className="py-0.5 font-medium text-ink tabular-nums">
-                  {!allNew && c.from !== '—' && (
-                    <span aria-hidden className="mr-1.5 text-ink-faint">
-                      →
-                    </span>
-                  )}
-                  {c.to}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <div className="mt-1">
+          <DataTable
+            label={`${title}: what changed`}
+            data={lines}
+            columns={COLUMNS}
+            getRowId={(c) => c.key}
+            columnVisibility={{ from: !allNew }}
+            hideHeader
+            compact
+          />
+        </div>
       )}
       {children}
     </div>

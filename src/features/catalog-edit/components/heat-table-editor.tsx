@@ -1,6 +1,8 @@
-import { useId, useRef, useState } from 'react';
+import { createColumnHelper } from '@tanstack/react-table';
+import { createContext, useContext, useId, useRef, useState } from 'react';
 import { HEAT_STEP_MAX, HEAT_STEP_MIN } from '@shared/schemas/specs';
 import { Button } from '@/components/ui/button';
+import { DataTable } from '@/components/ui/data-table';
 import { fillRun, HEAT_STEPS, newHeatRow, rowsAsCodes, type HeatRow, type RowErrors } from '../heat-table';
 import { HeatScale } from './heat-scale';
 
@@ -97,6 +99,90 @@ function RunFiller({ onFill }: { onFill: (rows: HeatRow[]) => void }) {
   );
 }
 
+/** A row of the table as its cells see it: the row, where it stands and what is wrong with it. */
+interface HeatLine {
+  row: HeatRow;
+  index: number;
+  errors: RowErrors;
+}
+
+// The cells' handlers change with every keystroke; a context hands them over so that the
+// columns (and the inputs in them) keep their identity and the focus stays where it is typed.
+const HeatRowActions = createContext<{
+  update: (key: number, patch: Partial<HeatRow>) => void;
+  remove: (key: number) => void;
+  /** Enter in a code: the next row's code, or a new row after the last. */
+  next: (index: number) => void;
+}>({ update: () => {}, remove: () => {}, next: () => {} });
+
+function CodeCell({ line: { row: r, index: i, errors: e } }: { line: HeatLine }) {
+  const { update, next } = useContext(HeatRowActions);
+  return (
+    <>
+      <input
+        data-code
+        aria-label={`Heat code, row ${i + 1}`}
+        aria-invalid={e.code ? true : undefined}
+        maxLength={20}
+        className={`${CELL} border-ink/20 font-mono`}
+        value={r.code}
+        onChange={(ev) => update(r.key, { code: ev.target.value })}
+        onKeyDown={(ev) => {
+          if (ev.key === 'Enter') {
+            ev.preventDefault();
+            next(i);
+          }
+        }}
+      />
+      {e.code && <p className="text-xs text-nogo">{e.code}</p>}
+    </>
+  );
+}
+
+function StepCell({ line: { row: r, index: i, errors: e } }: { line: HeatLine }) {
+  const { update } = useContext(HeatRowActions);
+  return (
+    <>
+      <select
+        aria-label={`Heat step, row ${i + 1}`}
+        aria-invalid={e.step ? true : undefined}
+        className={`${CELL} border-ink/20`}
+        value={r.step}
+        onChange={(ev) => update(r.key, { step: ev.target.value })}
+      >
+        <option value="">—</option>
+        {HEAT_STEPS.map((s) => (
+          <option key={s} value={s}>
+            {stepLabel(s)}
+          </option>
+        ))}
+      </select>
+      {e.step && <p className="text-xs text-nogo">{e.step}</p>}
+    </>
+  );
+}
+
+function RemoveCell({ line: { row: r, index: i } }: { line: HeatLine }) {
+  const { remove } = useContext(HeatRowActions);
+  return (
+    <Button variant="ghost" aria-label={`Remove row ${i + 1}`} onClick={() => remove(r.key)}>
+      Remove
+    </Button>
+  );
+}
+
+const col = createColumnHelper<HeatLine>();
+const COLUMNS = [
+  col.display({ id: 'code', header: 'Heat code', cell: (c) => <CodeCell line={c.row.original} />, meta: { cellClassName: 'w-[45%]' } }),
+  col.display({ id: 'step', header: 'Heat step', cell: (c) => <StepCell line={c.row.original} /> }),
+  col.display({
+    id: 'remove',
+    header: () => <span className="sr-only">Remove</span>,
+    cell: (c) => <RemoveCell line={c.row.original} />,
+    meta: { align: 'right' },
+  }),
+];
+
 /**
  * A brand's heat table: each of its heat codes and the heat step it stands for, typed row by row
  * or filled from a run, with the scale drawn as it is typed. Enter in a code adds the next row.
@@ -112,7 +198,7 @@ export function HeatTableEditor({
   tableError: string | null;
   onChange: (rows: HeatRow[]) => void;
 }) {
-  const list = useRef<HTMLTableSectionElement>(null);
+  const list = useRef<HTMLDivElement>(null);
   const focusCode = (index: number) =>
     requestAnimationFrame(() => list.current?.querySelectorAll<HTMLInputElement>('input[data-code]')[index]?.focus());
   const update = (key: number, patch: Partial<HeatRow>) => onChange(rows.map((r) => (r.key === key ? { ...r, ...patch } : r)));
@@ -124,70 +210,18 @@ export function HeatTableEditor({
     focusCode(rows.length);
   };
   const remove = (key: number) => onChange(rows.filter((r) => r.key !== key));
+  const next = (index: number) => (index === rows.length - 1 ? add() : focusCode(index + 1));
+  const lines = rows.map((row, index) => ({ row, index, errors: errors[row.key] ?? {} }));
 
   return (
     <div className="flex flex-col gap-3">
       <RunFiller onFill={onChange} />
       {rows.length > 0 ? (
-        <table className="w-full text-left text-[15px]" aria-label="Heat codes">
-          <thead className="text-xs font-semibold tracking-wide text-ink-soft uppercase">
-            <tr>
-              <th className="w-[45%] pb-1 pr-2 font-semibold">Heat code</th>
-              <th className="pb-1 pr-2 font-semibold">Heat step</th>
-              <th className="pb-1" />
-            </tr>
-          </thead>
-          <tbody ref={list}>
-            {rows.map((r, i) => {
-              const e = errors[r.key] ?? {};
-              return (
-                <tr key={r.key} className="align-top">
-                  <td className="py-0.5 pr-2">
-                    <input
-                      data-code
-                      aria-label={`Heat code, row ${i + 1}`}
-                      aria-invalid={e.code ? true : undefined}
-                      maxLength={20}
-                      className={`${CELL} border-ink/20 font-mono`}
-                      value={r.code}
-                      onChange={(ev) => update(r.key, { code: ev.target.value })}
-                      onKeyDown={(ev) => {
-                        if (ev.key === 'Enter') {
-                          ev.preventDefault();
-                          if (i === rows.length - 1) add();
-                          else focusCode(i + 1);
-                        }
-                      }}
-                    />
-                    {e.code && <p className="text-xs text-nogo">{e.code}</p>}
-                  </td>
-                  <td className="py-0.5 pr-2">
-                    <select
-                      aria-label={`Heat step, row ${i + 1}`}
-                      aria-invalid={e.step ? true : undefined}
-                      className={`${CELL} border-ink/20`}
-                      value={r.step}
-                      onChange={(ev) => update(r.key, { step: ev.target.value })}
-                    >
-                      <option value="">—</option>
-                      {HEAT_STEPS.map((s) => (
-                        <option key={s} value={s}>
-                          {stepLabel(s)}
-                        </option>
-                      ))}
-                    </select>
-                    {e.step && <p className="text-xs text-nogo">{e.step}</p>}
-                  </td>
-                  <td className="py-0.5 text-right">
-                    <Button variant="ghost" aria-label={`Remove row ${i + 1}`} onClick={() => remove(r.key)}>
-                      Remove
-                    </Button>
-                  </td>
-                </tr>
-              );
-            })}
-          </tbody>
-        </table>
+        <div ref={list}>
+          <HeatRowActions.Provider value={{ update, remove, next }}>
+            <DataTable label="Heat codes" data={lines} columns={COLUMNS} getRowId={(l) => String(l.row.key)} compact />
+          </HeatRowActions.Provider>
+        </div>
       ) : (
         <p className="text-sm text-ink-soft">
           No heat codes yet. A coil-only brand needs none; a plug brand needs one per heat range it sells.

@@ -1,7 +1,15 @@
-import { useState, type ReactNode } from 'react';
+import { createColumnHelper, type ColumnDef } from '@tanstack/react-table';
+import { useState } from 'react';
 import { isDefusedFormula } from '@shared/price-list/formula-text';
-import type { PriceListChange, PriceListChangeType, SupersessionState } from '@shared/schemas/price-lists';
+import {
+  PRICE_LIST_CHANGE_SORTS,
+  type PriceListChange,
+  type PriceListChangeType,
+  type SupersessionState,
+} from '@shared/schemas/price-lists';
+import { DataTable } from '@/components/ui/data-table';
 import { ErrorNote } from '@/components/ui/panel';
+import { useServerSorting } from '@/components/ui/server-sorting';
 import { usePriceListChanges } from '../api/get-price-list-changes';
 import { formatMoney, formatPercentChange } from '@shared/format';
 import { percentChange } from '../format';
@@ -55,33 +63,39 @@ const SUPERSESSION_TEXT: Record<SupersessionState, string> = {
   loop: 'would make a loop; not linked',
 };
 
-interface Column {
-  header: string;
-  cell: (row: PriceListChange) => ReactNode;
-  className?: string;
-}
+const col = createColumnHelper<PriceListChange>();
+type Columns = ColumnDef<PriceListChange, never>[];
 
-const line: Column = { header: 'Line', cell: (r) => r.line, className: 'w-12 text-ink-faint tabular-nums' };
+// Column ids that the server sorts by (PRICE_LIST_CHANGE_SORTS) say so with enableSorting.
+const line = col.accessor('line', {
+  id: 'line',
+  header: 'Line',
+  enableSorting: true,
+  meta: { align: 'right', cellClassName: 'w-12 text-ink-faint' },
+});
 // Number and brand together: two brands may print the same number.
-const part: Column = {
-  header: 'Part',
-  cell: (r) => (
-    <>
-      <span className="block whitespace-nowrap font-mono text-sm font-semibold" title="As the supplier printed it">
-        {r.partNumber}
-      </span>
-      {r.catalogNumber !== null && (
-        <span className="block whitespace-nowrap text-xs text-ink-soft">
-          catalog <span className="font-mono text-ink">{r.catalogNumber}</span>
+const part = (header: string) =>
+  col.accessor('partNumber', {
+    id: 'partNumber',
+    header,
+    enableSorting: true,
+    cell: ({ row: { original: r } }) => (
+      <>
+        <span className="block whitespace-nowrap font-mono text-sm font-semibold" title="As the supplier printed it">
+          {r.partNumber}
         </span>
-      )}
-      <span className="block whitespace-nowrap text-xs text-ink-soft">{r.brand}</span>
-    </>
-  ),
-};
-const description: Column = {
+        {r.catalogNumber !== null && (
+          <span className="block whitespace-nowrap text-xs text-ink-soft">
+            catalog <span className="font-mono text-ink">{r.catalogNumber}</span>
+          </span>
+        )}
+        <span className="block whitespace-nowrap text-xs text-ink-soft">{r.brand}</span>
+      </>
+    ),
+  });
+const description = col.accessor('description', {
   header: 'Description',
-  cell: (r) => (
+  cell: ({ row: { original: r } }) => (
     <>
       <span className="block max-w-[18rem] truncate 2xl:max-w-[28rem]" title={r.description ?? undefined}>
         {r.description ?? '—'}
@@ -91,59 +105,99 @@ const description: Column = {
       )}
     </>
   ),
-  className: 'text-ink-soft',
-};
-const cost: Column = { header: 'Cost', cell: (r) => formatMoney(r.newCostCents), className: 'tabular-nums text-right' };
-const list: Column = { header: 'List', cell: (r) => formatMoney(r.newListCents), className: 'tabular-nums text-right' };
+  meta: { cellClassName: 'text-ink-soft' },
+});
+const cost = col.accessor('newCostCents', {
+  id: 'cost',
+  header: 'Cost',
+  enableSorting: true,
+  cell: (c) => formatMoney(c.getValue()),
+  meta: { align: 'right' },
+});
+const list = col.accessor('newListCents', {
+  id: 'list',
+  header: 'List',
+  enableSorting: true,
+  cell: (c) => formatMoney(c.getValue()),
+  meta: { align: 'right' },
+});
 
-const COLUMNS: Record<PriceListChangeType, Column[]> = {
+const COLUMNS: Record<PriceListChangeType, Columns> = {
   new: [
     line,
-    part,
-    { header: 'Kind', cell: (r) => r.kind ?? '—' },
+    part('Part'),
+    col.accessor((r) => r.kind ?? '—', { id: 'kind', header: 'Kind' }),
     description,
     cost,
     list,
-    { header: 'Core', cell: (r) => (r.newCoreCents ? formatMoney(r.newCoreCents) : '—'), className: 'tabular-nums text-right' },
-    { header: 'Pack', cell: (r) => r.newPackQty ?? '—', className: 'tabular-nums text-right' },
-    {
+    col.accessor('newCoreCents', {
+      id: 'core',
+      header: 'Core',
+      cell: (c) => {
+        const cents = c.getValue();
+        return cents ? formatMoney(cents) : '—';
+      },
+      meta: { align: 'right' },
+    }),
+    col.accessor((r) => r.newPackQty ?? '—', { id: 'pack', header: 'Pack', meta: { align: 'right' } }),
+    col.accessor('specStored', {
       header: 'Spec',
-      cell: (r) => (r.specStored ? 'from the file' : <span className="whitespace-nowrap text-review">no spec — no verdict</span>),
-      className: 'text-sm',
-    },
+      cell: (c) => (c.getValue() ? 'from the file' : <span className="whitespace-nowrap text-review">no spec — no verdict</span>),
+      meta: { cellClassName: 'text-sm' },
+    }),
   ],
   changed: [
     line,
-    part,
+    part('Part'),
     description,
-    {
+    // Sorted by the size of the move: the biggest rises first, then the biggest drops first.
+    col.accessor('costChangePct', {
+      id: 'costChange',
       header: 'Cost',
-      cell: (r) => (
+      enableSorting: true,
+      cell: ({ row: { original: r } }) => (
         <>
           <PriceMove from={r.oldCostCents} to={r.newCostCents} pct={r.costChangePct} />
           {r.oldCostCents === null && <span className="block text-xs text-ink-soft">first price</span>}
         </>
       ),
-    },
-    {
+    }),
+    col.accessor('listChangePct', {
+      id: 'listChange',
       header: 'List',
-      cell: (r) => (
+      enableSorting: true,
+      cell: ({ row: { original: r } }) => (
         <>
           <PriceMove from={r.oldListCents} to={r.newListCents} pct={r.listChangePct} />
           <OtherMoves row={r} />
         </>
       ),
-    },
-    { header: 'Check', cell: (r) => (r.flagged ? <FlagMark /> : null) },
+    }),
+    col.accessor('flagged', { header: 'Check', cell: (c) => (c.getValue() ? <FlagMark /> : null) }),
   ],
   supersession: [
     line,
-    { header: 'Old number', cell: (r) => r.supersedes ?? '—', className: 'font-mono text-sm whitespace-nowrap text-ink-soft' },
-    { ...part, header: 'Replaced by' },
+    col.accessor((r) => r.supersedes ?? '—', {
+      id: 'supersedes',
+      header: 'Old number',
+      meta: { cellClassName: 'font-mono text-sm whitespace-nowrap text-ink-soft' },
+    }),
+    part('Replaced by'),
     description,
-    { header: 'Link', cell: (r) => (r.supersession ? SUPERSESSION_TEXT[r.supersession] : '—'), className: 'text-sm' },
+    col.accessor((r) => (r.supersession ? SUPERSESSION_TEXT[r.supersession] : '—'), {
+      id: 'link',
+      header: 'Link',
+      meta: { cellClassName: 'text-sm' },
+    }),
   ],
-  unchanged: [line, part, description, cost, list],
+  unchanged: [line, part('Part'), description, cost, list],
+};
+
+const LABEL: Record<PriceListChangeType, string> = {
+  new: 'New parts',
+  changed: 'Price changes',
+  supersession: 'Supersessions',
+  unchanged: 'Unchanged',
 };
 
 const EMPTY: Record<PriceListChangeType, string> = {
@@ -153,42 +207,27 @@ const EMPTY: Record<PriceListChangeType, string> = {
   unchanged: 'Every row changes something.',
 };
 
-/** One kind of change in the staged list, a page at a time. */
+/** One kind of change in the staged list, a page at a time, sorted by the server. */
 export function ChangeTable({ listId, type }: { listId: string; type: PriceListChangeType }) {
   const [offset, setOffset] = useState(0);
-  const changes = usePriceListChanges({ id: listId, type, offset, limit: PAGE });
-  const columns = COLUMNS[type];
+  const sorting = useServerSorting(PRICE_LIST_CHANGE_SORTS, { id: 'line', desc: false }, () => setOffset(0));
+  const changes = usePriceListChanges({ id: listId, type, sort: sorting.sort, dir: sorting.dir, offset, limit: PAGE });
   if (changes.error) return <ErrorNote error={changes.error} />;
   if (!changes.data) return <p className="py-3 text-ink-soft">Loading…</p>;
   if (changes.data.total === 0) return <p className="py-3 text-ink-soft">{EMPTY[type]}</p>;
   return (
     <>
-      <div className="overflow-x-auto">
-        <table className="w-full text-left text-[15px]">
-          <thead className="border-b border-ink/10 text-xs uppercase tracking-wide text-ink-soft">
-            <tr>
-              {columns.map((c) => (
-                <th key={c.header} className={`whitespace-nowrap py-1.5 pr-3 ${c.className?.includes('text-right') ? 'text-right' : ''}`}>
-                  {c.header}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody className={changes.isPlaceholderData ? 'opacity-60' : ''}>
-            {changes.data.changes.map((row) => (
-              <tr
-                key={`${row.line}-${row.partNumber}`}
-                className={`border-b border-ink/5 ${row.flagged && type === 'changed' ? 'bg-review-soft/50' : ''}`}
-              >
-                {columns.map((c) => (
-                  <td key={c.header} className={`py-1.5 pr-3 align-top ${c.className ?? ''}`}>
-                    {c.cell(row)}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      {/* The last page stays dimmed on screen while the next one loads. */}
+      <div className={changes.isPlaceholderData ? 'opacity-60' : ''}>
+        <DataTable
+          label={LABEL[type]}
+          data={changes.data.changes}
+          columns={COLUMNS[type]}
+          getRowId={(r) => String(r.line)}
+          sorting={sorting.sorting}
+          onSortingChange={sorting.onSortingChange}
+          rowClassName={(r) => (r.flagged && type === 'changed' ? 'bg-review-soft/50' : '')}
+        />
       </div>
       <Pager offset={offset} limit={PAGE} total={changes.data.total} onOffset={setOffset} />
     </>

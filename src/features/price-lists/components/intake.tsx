@@ -180,7 +180,7 @@ function StagedList({
   const [delimiter, setDelimiter] = useState<Delimiter>(isDelimiter(list.delimiter) ? list.delimiter : ',');
 
   return (
-    <div className="grid gap-4 lg:grid-cols-[minmax(340px,380px)_minmax(0,1fr)] lg:items-start">
+    <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(340px,380px)_minmax(0,1fr)] lg:items-start">
       <Panel title="Columns">
         <div className="flex flex-col gap-3">
           <SelectField

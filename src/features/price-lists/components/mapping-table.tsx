@@ -1,3 +1,5 @@
+import { createColumnHelper } from '@tanstack/react-table';
+import { createContext, useContext } from 'react';
 import {
   BASE_FIELDS,
   COIL_SPEC_FIELDS,
@@ -8,6 +10,7 @@ import {
   type PriceListField,
 } from '@shared/price-list/fields';
 import { validateMapping, type Mapping, type MappingProblem } from '@shared/price-list/mapping';
+import { DataTable } from '@/components/ui/data-table';
 
 /** A mapping key is the header as printed, or the column's index when the header is empty. */
 export const columnKey = (header: string, index: number): string => (header.trim() === '' ? String(index) : header);
@@ -38,6 +41,73 @@ function CheckIcon({ ok }: { ok: boolean }) {
   );
 }
 
+/** One column of the file and the field it fills. */
+interface FileColumn {
+  key: string;
+  header: string;
+  index: number;
+  field: PriceListField | null;
+  /** The field is mapped from another column too. */
+  twice: boolean;
+}
+
+// The cells' handler changes with every mapping; a context hands it over so that the columns
+// (and the selects in them) keep their identity and their focus.
+const MappingContext = createContext<{ choose: (key: string, value: string) => void; disabled: boolean }>({
+  choose: () => {},
+  disabled: true,
+});
+
+const selectId = (c: FileColumn) => `map-col-${c.index}`;
+
+function FileColumnName({ column: c }: { column: FileColumn }) {
+  return (
+    <label htmlFor={selectId(c)} className="font-mono text-sm font-normal text-ink">
+      {c.header.trim() === '' ? <span className="italic text-ink-soft">column {c.index + 1}, no header</span> : c.header}
+    </label>
+  );
+}
+
+function FieldChoice({ column: c }: { column: FileColumn }) {
+  const { choose, disabled } = useContext(MappingContext);
+  return (
+    <div className="flex items-center gap-2">
+      <select
+        id={selectId(c)}
+        value={c.field ?? ''}
+        disabled={disabled}
+        onChange={(e) => choose(c.key, e.target.value)}
+        className={`w-full min-w-40 rounded border bg-paper-raised px-2 py-1 text-[15px] ${
+          c.twice ? 'border-nogo' : c.field === null ? 'border-ink/15 text-ink-soft' : 'border-ink/25'
+        }`}
+      >
+        <option value="">— not used —</option>
+        {FIELD_GROUPS.map((g) => (
+          <optgroup key={g.label} label={g.label}>
+            {g.fields.map((f) => (
+              <option key={f} value={f}>
+                {FIELD_LABELS[f]}
+                {REQUIRED_FIELDS.includes(f) ? ' (required)' : ''}
+              </option>
+            ))}
+          </optgroup>
+        ))}
+      </select>
+      {c.twice && <span className="whitespace-nowrap text-xs font-semibold text-nogo">used twice</span>}
+    </div>
+  );
+}
+
+const col = createColumnHelper<FileColumn>();
+const COLUMNS = [
+  col.accessor('header', {
+    header: 'In the file',
+    cell: (c) => <FileColumnName column={c.row.original} />,
+    meta: { rowHeader: true, cellClassName: 'align-middle' },
+  }),
+  col.display({ id: 'field', header: 'Arcwise field', cell: (c) => <FieldChoice column={c.row.original} /> }),
+];
+
 /**
  * The file's columns against Arcwise's fields, one select per column. Required fields are
  * listed above the table with whether a column fills them, and each problem is spelled out.
@@ -58,6 +128,11 @@ export function MappingTable({
   const twice = new Set(problems.flatMap((p) => (p.code === 'mapped-twice' ? [p.field] : [])));
 
   const set = (key: string, value: string) => onChange({ ...mapping, [key]: isField(value) ? value : null });
+  const rows: FileColumn[] = columns.map((header, index) => {
+    const key = columnKey(header, index);
+    const field = mapping[key] ?? null;
+    return { key, header, index, field, twice: field !== null && twice.has(field) };
+  });
 
   return (
     <div className="flex flex-col gap-3">
@@ -70,62 +145,9 @@ export function MappingTable({
           </li>
         ))}
       </ul>
-      <table className="w-full text-left text-[15px]">
-        <thead className="border-b border-ink/10 text-xs uppercase tracking-wide text-ink-soft">
-          <tr>
-            <th className="whitespace-nowrap py-1.5 pr-3">In the file</th>
-            <th className="py-1.5">Arcwise field</th>
-          </tr>
-        </thead>
-        <tbody>
-          {columns.map((header, i) => {
-            const key = columnKey(header, i);
-            const field = mapping[key] ?? null;
-            const id = `map-col-${i}`;
-            return (
-              <tr key={key} className="border-b border-ink/5">
-                <td className="py-1 pr-3 align-middle">
-                  <label htmlFor={id} className="font-mono text-sm text-ink">
-                    {header.trim() === '' ? <span className="italic text-ink-soft">column {i + 1}, no header</span> : header}
-                  </label>
-                </td>
-                <td className="py-1">
-                  <div className="flex items-center gap-2">
-                    <select
-                      id={id}
-                      value={field ?? ''}
-                      disabled={disabled}
-                      onChange={(e) => set(key, e.target.value)}
-                      className={`w-full rounded border bg-paper-raised px-2 py-1 text-[15px] ${
-                        field !== null && twice.has(field)
-                          ? 'border-nogo'
-                          : field === null
-                            ? 'border-ink/15 text-ink-soft'
-                            : 'border-ink/25'
-                      }`}
-                    >
-                      <option value="">— not used —</option>
-                      {FIELD_GROUPS.map((g) => (
-                        <optgroup key={g.label} label={g.label}>
-                          {g.fields.map((f) => (
-                            <option key={f} value={f}>
-                              {FIELD_LABELS[f]}
-                              {REQUIRED_FIELDS.includes(f) ? ' (required)' : ''}
-                            </option>
-                          ))}
-                        </optgroup>
-                      ))}
-                    </select>
-                    {field !== null && twice.has(field) && (
-                      <span className="whitespace-nowrap text-xs font-semibold text-nogo">used twice</span>
-                    )}
-                  </div>
-                </td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
+      <MappingContext.Provider value={{ choose: set, disabled }}>
+        <DataTable label="Column mapping" data={rows} columns={COLUMNS} getRowId={(r) => r.key} />
+      </MappingContext.Provider>
       {problems.length > 0 && (
         <ul
           role="alert"
