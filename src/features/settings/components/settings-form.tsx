@@ -57,7 +57,11 @@ function LoadPointTable() {
       ...LOAD_POINT_COLUMNS.map((c) =>
         col.display({
           id: c.key,
-          header: `${c.label} (${c.unit})`,
+          header: () => (
+            <>
+              {c.label} <span className="normal-case">({c.unit})</span>
+            </>
+          ),
           cell: ({ row: { original: r } }) => {
             const path = loadPointPath(r.key, c.key);
             const aboveFull = r.key === 'boost' && c.key === 'mapKpa';
