@@ -37,7 +37,8 @@ export function HeatScale({
             aria-label={`step ${step}: ${onStep.length ? `code ${onStep.join(', ')}` : 'no code'}`}
             className={`flex min-h-11 flex-col items-center border-r border-ink/10 px-0.5 py-0.5 last:border-r-0 ${onStep.length ? 'bg-accent-soft' : 'bg-paper'}`}
           >
-            <span className="text-[11px] leading-4 text-ink-faint tabular-nums">{step}</span>
+            {/* ink-faint keeps 4.5:1 only on the paper colours, not on the accent's tint. */}
+            <span className={`text-[11px] leading-4 tabular-nums ${onStep.length ? 'text-ink-soft' : 'text-ink-faint'}`}>{step}</span>
             <span className="font-mono text-sm leading-5 font-semibold break-all text-ink">{onStep.join(' ')}</span>
           </li>
         ))}
