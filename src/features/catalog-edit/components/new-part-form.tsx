@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useFormContext, useWatch } from 'react-hook-form';
+import { useFormContext, useWatch, type DefaultValues } from 'react-hook-form';
 import type { z } from 'zod';
 import type { Brand } from '@shared/schemas/brands';
 import { createPartBodySchema, type PartDetail } from '@shared/schemas/parts';
@@ -19,14 +19,14 @@ const KIND_WORDS: Record<PartKind, string> = { coil: 'Ignition coil', plug: 'Spa
 type NewPart = z.input<typeof createPartBodySchema>;
 
 /** Empty but for what stays for the next part of a series: the brand and the kind. */
-const startValues = (brand: string | undefined, kind: PartKind): NewPart => ({
-  brand: brand as string,
+const startValues = (brand: string | undefined, kind: PartKind): DefaultValues<NewPart> => ({
+  brand,
   kind,
   partNumber: '',
   description: '',
   gtin: null,
-  coil: specStartValues('coil', null) as NewPart['coil'],
-  plug: specStartValues('plug', null) as NewPart['plug'],
+  coil: specStartValues('coil', null),
+  plug: specStartValues('plug', null),
 });
 
 function KindRadios() {
