@@ -18,7 +18,7 @@ export default {
         paper: { DEFAULT: '#f6f7f5', raised: '#ffffff', sunk: '#eceeea' },
         accent: { DEFAULT: '#0f6b6b', strong: '#0a5050', soft: '#d7ecea' },
         go: { DEFAULT: '#1f7a3d', soft: '#e0f1e5' },
-        review: { DEFAULT: '#9a6200', soft: '#fbefd6' },
+        review: { DEFAULT: '#875500', soft: '#fbefd6' },
         nogo: { DEFAULT: '#b3261e', soft: '#f8e0de' },
       },
     },

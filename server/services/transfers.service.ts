@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { User } from '../../shared/schemas/auth';
 import {
   TRANSFER_STEPS,
+  type TransferConflictDetails,
   type TransferRequestBody,
   type TransferStep,
   type TransferStepBody,
@@ -90,7 +91,8 @@ export async function stepTransfer(
     }
     const reason = body.step === 'refuse' ? body.reason : null;
     if (!(await advanceTransfer(m, id, rule.from, rule.to, reader.id, reason))) {
-      throw AppError.conflict(`This transfer is no longer ${rule.from}: someone else acted on it first.`, { state: t.state });
+      const details: TransferConflictDetails = { state: t.state };
+      throw AppError.conflict(`This transfer is no longer ${rule.from}: someone else acted on it first.`, details);
     }
     if (body.step === 'receive') {
       const move = { partId: t.part_id, reason: 'transfer', actorId: reader.id, transferId: id };

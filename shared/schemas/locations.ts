@@ -67,14 +67,21 @@ export const TRANSFER_STEP_LABELS: Record<TransferStep, string> = {
   cancel: 'Cancel request',
 };
 
+/** Refusing says why: the requesting clerk reads it on the Transfers page and in the mail. */
+export const transferRefuseBodySchema = z.object({ step: z.literal('refuse'), reason: text({ min: 1, max: 300 }) });
+
 export const transferStepBodySchema = z.discriminatedUnion('step', [
   z.object({ step: z.literal('pick') }),
   z.object({ step: z.literal('send') }),
   z.object({ step: z.literal('receive') }),
-  z.object({ step: z.literal('refuse'), reason: text({ min: 1, max: 300 }) }),
+  transferRefuseBodySchema,
   z.object({ step: z.literal('cancel') }),
 ]);
 export type TransferStepBody = z.infer<typeof transferStepBodySchema>;
+
+/** The `details` of the 409 a step gets when someone else moved the transfer on first. */
+export const transferConflictDetailsSchema = z.object({ state: transferStateSchema });
+export type TransferConflictDetails = z.infer<typeof transferConflictDetailsSchema>;
 
 export const TRANSFERS_PAGE_MAX = 100;
 export const transfersQuerySchema = z.object({

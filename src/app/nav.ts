@@ -17,6 +17,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/price-lists', label: 'Price lists', roles: ['buyer', 'admin'] },
   { to: '/suppliers', label: 'Suppliers', roles: ['buyer', 'admin'] },
   { to: '/catalog', label: 'Catalog', roles: ['buyer', 'admin'] },
+  { to: '/stores', label: 'Stores', roles: ['admin'] },
   { to: '/team', label: 'Team', roles: ['admin'] },
   { to: '/outbox', label: 'Outbox', roles: ['admin'] },
   { to: '/transfers', label: 'Transfers', roles: ['clerk', 'buyer', 'admin'] },

@@ -32,6 +32,7 @@ export const router = createBrowserRouter([
           { path: 'price-lists', lazy: page(() => import('./routes/price-lists/price-lists'), 'PriceListsPage') },
           { path: 'suppliers', lazy: page(() => import('./routes/suppliers/suppliers'), 'SuppliersPage') },
           { path: 'catalog', lazy: page(() => import('./routes/catalog/catalog'), 'CatalogPage') },
+          { path: 'stores', lazy: page(() => import('./routes/stores/stores'), 'StoresPage') },
           { path: 'team', lazy: page(() => import('./routes/team/team'), 'TeamPage') },
           { path: 'outbox', lazy: page(() => import('./routes/outbox/outbox'), 'OutboxPage') },
           { path: 'jobs', lazy: page(() => import('./routes/jobs/jobs'), 'JobsPage') },

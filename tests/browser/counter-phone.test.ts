@@ -44,7 +44,7 @@ describe('the Counter on a phone', () => {
     expect(box!.x + box!.width).toBeLessThanOrEqual(PHONE.width + 0.5);
     expect(await sheet.isVisible()).toBe(true);
     // Its content is readable stock and price, as on the desktop.
-    expect(await sheet.textContent()).toMatch(/\d+ on hand/);
+    expect(await sheet.textContent()).toMatch(/\d+ here/);
     await s.shot('counter-phone-sheet');
 
     // Still no sideways scroll with the sheet open.

@@ -110,7 +110,7 @@ describe('journey 6: price-list intake', () => {
     await s.page.getByRole('status').filter({ hasText: 'Committed supplier-a-clean.csv' }).waitFor();
     // The message says whether the Counter sells at this supplier's prices, by the sell-price rule.
     expect(await s.page.getByRole('status').filter({ hasText: 'Committed supplier-a-clean.csv' }).textContent()).toMatch(
-      /Counter (now sells|'s prices did not change|’s prices did not change)/,
+      /Counter( now sells|'s prices did not change|’s prices did not change)/,
     );
     await s.shot('price-lists-committed');
     const historyRow = s.page.getByRole('row').filter({ hasText: 'supplier-a-clean.csv' }).filter({ hasText: 'committed' });
@@ -174,14 +174,15 @@ describe('journey 6: price-list intake', () => {
     const box = s.page.getByLabel('Number, words or barcode');
     await box.fill('NR/IR 2208');
     await box.press('Enter');
-    const part = s.page.getByRole('complementary', { name: 'Part' });
+    const part = s.page.getByRole('region', { name: 'Part NR/IR 2208' });
     const priceRow = part.getByRole('row').filter({ hasText: supplierName });
     await priceRow.waitFor();
     expect(await priceRow.textContent()).toMatch(/\$16\.99.*\$7\.60/);
     await priceRow.scrollIntoViewIfNeeded();
     await s.shot('price-lists-counter-new-price');
 
-    // The Suppliers page now dates the supplier's last price list.
+    // The Suppliers page now dates the supplier's last price list (the part's sheet closes first).
+    await s.page.keyboard.press('Escape');
     await nav.getByRole('link', { name: 'Suppliers' }).click();
     const supplierRow = s.page.getByRole('row').filter({ has: s.page.getByRole('cell', { name: supplierName, exact: true }) });
     await supplierRow.filter({ hasNotText: 'none yet' }).waitFor();

@@ -44,7 +44,7 @@ const detail = (part: PartSummary, spec: unknown) => ({
   spec,
   interchange: [],
   supersession: { supersedes: [], supersededBy: null, current: { id: part.id, partNumber: part.partNumber } },
-  stock: { inStock: false, here: null, elsewhere: [] },
+  stock: { inStock: true, here: { locationId: '00000000-0000-4000-8000-0000000000a1', onHand: 2, bin: 'B-01-1' }, elsewhere: [] },
   price: null,
   sellPriceBasis: null,
   prices: [],

@@ -102,6 +102,7 @@ const partDetail = (p: PartSummary, spec: unknown, prices: unknown[]) => ({
   supersession: { supersedes: [], supersededBy: null, current: { id: p.id, partNumber: p.partNumber } },
   stock: { inStock: true, here: { locationId: '00000000-0000-4000-8000-0000000000a1', onHand: 3, bin: 'B-09-9' }, elsewhere: [] },
   price: price(999),
+  sellPriceBasis: null,
   prices,
 });
 
@@ -268,7 +269,7 @@ describe('Counter page', () => {
       verdict,
       deviation: 0,
       checks: [{ id: 'connector', verdict, original: 'A', substitute: 'C', unit: '', reason: `Connector ${verdict}.` }],
-      stock: { onHand: 5, bin: 'C-02-1', inStock: true },
+      stock: { inStock: true, here: { locationId: '00000000-0000-4000-8000-0000000000a1', onHand: 5, bin: 'C-02-1' }, elsewhere: [] },
       price: price(5299),
     });
     const calls = stubApi({
@@ -294,7 +295,7 @@ describe('Counter page', () => {
     expect(within(items[1]!).getByText('review')).toBeTruthy();
     expect(within(items[1]!).getByText('Connector review.')).toBeTruthy();
     // Stock reads as it does for the fitted part (shared/format.ts formatStock), not "in stock: yes".
-    expect(items[0]!.textContent).toContain('5 on hand · bin C-02-1');
+    expect(items[0]!.textContent).toContain('5 here · bin C-02-1');
     expect(within(items[0]!).getByRole('link', { name: 'Compare' }).getAttribute('href')).toBe(
       `/compare?original=${C1}&substitute=${A1}&engine=${ENGINE_ID}`,
     );

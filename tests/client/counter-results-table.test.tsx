@@ -82,7 +82,7 @@ describe('results table keyboard', () => {
 
   it('shows stock as the rest of the app does: on hand to the store, in stock or not to a technician', () => {
     const store = renderTable();
-    expect(store.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['7 here', '7 here', '0 here']);
+    expect(store.rows.map((r) => r.lastElementChild?.textContent)).toEqual(['7 here · bin B-01-1', '7 here · bin B-01-1', '0 here']);
     cleanup();
     // The server leaves the count out for a technician (search.presenter.ts).
     const tech = renderTable({ hits: HITS.map(({ stock: _stock, ...h }) => h) });

@@ -9,6 +9,11 @@ import { TeamPage } from '@/app/routes/team/team';
 const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
 const ME: User = { id: uuid(1), email: 'admin@x.test', name: 'Avery Admin', role: 'admin', shopId: null, homeLocationId: null };
 const SHOP = { id: uuid(9), name: 'Northgate Garage' };
+// Invented stores of an invented chain.
+const STORES = [
+  { id: uuid(21), name: 'Fenwick Row', address: '1 Fenwick Row', phone: '555-0101', openingHours: '' },
+  { id: uuid(22), name: 'Saltmarsh', address: '9 Dyke Lane', phone: '555-0102', openingHours: '' },
+];
 const member = (n: number, name: string, role: TeamMember['role'], over: Partial<TeamMember> = {}): TeamMember => ({
   id: uuid(n),
   email: `${name.split(' ')[0]!.toLowerCase()}@x.test`,
@@ -22,7 +27,11 @@ const member = (n: number, name: string, role: TeamMember['role'], over: Partial
   createdAt: '2026-11-02T09:00:00.000Z',
   ...over,
 });
-const USERS = [member(1, 'Avery Admin', 'admin'), member(2, 'Blair Clerk', 'clerk'), member(3, 'Casey Buyer', 'buyer')];
+const USERS = [
+  member(1, 'Avery Admin', 'admin'),
+  member(2, 'Blair Clerk', 'clerk', { homeLocationId: uuid(21) }),
+  member(3, 'Casey Buyer', 'buyer'),
+];
 
 type Sent = { method: string; path: string; body: unknown };
 let sent: Sent[];
@@ -42,6 +51,7 @@ beforeEach(() => {
       if (path === '/api/auth/csrf') return json(200, { token: 't' });
       if (method === 'GET' && path === '/api/users') return json(200, { users: USERS });
       if (method === 'GET' && path === '/api/shops') return json(200, { shops: [SHOP] });
+      if (method === 'GET' && path === '/api/locations') return json(200, { locations: STORES });
       sent.push({ method, path, body: JSON.parse(String(init.body ?? 'null')) });
       return json(nextWrite.status, nextWrite.body);
     }),
@@ -65,7 +75,7 @@ function renderTeam() {
       </MemoryRouter>
     </QueryClientProvider>,
   );
-  return screen.getByRole('form', { name: 'Invite a user' });
+  return screen.findByRole('form', { name: 'Invite a user' });
 }
 
 const type = (el: HTMLElement, value: string) => {
@@ -82,7 +92,7 @@ const description = (el: HTMLElement) =>
 
 describe('the invite form (react-hook-form on the shared invite schema)', () => {
   it('sends nothing while a field is wrong, and names each wrong field by its label in plain words', async () => {
-    const form = renderTeam();
+    const form = await renderTeam();
     type(within(form).getByLabelText('E-mail'), 'not-an-address');
     fireEvent.click(within(form).getByRole('button', { name: 'Send invitation' }));
     const name = within(form).getByLabelText('Name');
@@ -94,7 +104,7 @@ describe('the invite form (react-hook-form on the shared invite schema)', () => 
   });
 
   it('asks for a shop when the role is technician, under the Shop field', async () => {
-    const form = renderTeam();
+    const form = await renderTeam();
     type(within(form).getByLabelText('Name'), 'Robin Tech');
     type(within(form).getByLabelText('E-mail'), 'robin@x.test');
     fireEvent.change(within(form).getByLabelText('Role'), { target: { value: 'technician' } });
@@ -119,8 +129,34 @@ describe('the invite form (react-hook-form on the shared invite schema)', () => 
     expect((within(form).getByLabelText('Name') as HTMLInputElement).value).toBe('');
   });
 
+  it("sends the home store chosen for the store's staff, and none for a technician", async () => {
+    const form = await renderTeam();
+    type(within(form).getByLabelText('Name'), 'Robin Clerk');
+    type(within(form).getByLabelText('E-mail'), 'robin@x.test');
+    const home = within(form).getByLabelText('Home store') as HTMLSelectElement;
+    expect(
+      within(home)
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(['The chain’s first store', 'Fenwick Row', 'Saltmarsh']);
+    fireEvent.change(home, { target: { value: uuid(22) } });
+    nextWrite = { status: 201, body: { user: member(8, 'Robin Clerk', 'clerk'), expiresAt: '2026-12-04T15:04:00.000Z' } };
+    fireEvent.click(within(form).getByRole('button', { name: 'Send invitation' }));
+    await screen.findByText(/Invitation sent/);
+    expect(sent).toEqual([
+      {
+        method: 'POST',
+        path: '/api/users/invite',
+        body: { name: 'Robin Clerk', email: 'robin@x.test', role: 'clerk', shopId: null, homeLocationId: uuid(22) },
+      },
+    ]);
+    // A technician works at a shop: the home store is not theirs to have.
+    fireEvent.change(within(form).getByLabelText('Role'), { target: { value: 'technician' } });
+    expect(home.disabled).toBe(true);
+  });
+
   it("puts the API's field details on their fields, once, and what no field shows above the button", async () => {
-    const form = renderTeam();
+    const form = await renderTeam();
     type(within(form).getByLabelText('Name'), 'Robin');
     type(within(form).getByLabelText('E-mail'), 'robin@x.test');
     nextWrite = {
@@ -155,7 +191,7 @@ describe('the team table (DataTable)', () => {
       .map((r) => r.firstElementChild?.textContent);
 
   it('sorts by name, then by role, saying which way in aria-sort', async () => {
-    renderTeam();
+    await renderTeam();
     await screen.findByRole('table', { name: 'People' });
     expect(names()).toEqual(['Avery Admin', 'Blair Clerk', 'Casey Buyer']);
     const nameHeader = screen.getByRole('columnheader', { name: /Name/ });
@@ -173,8 +209,19 @@ describe('the team table (DataTable)', () => {
     expect(within(screen.getByRole('columnheader', { name: 'E-mail' })).queryByRole('button')).toBeNull();
   });
 
+  it("shows each person's home store and moves them to another at once (no sign-out, so no question)", async () => {
+    await renderTeam();
+    const home = (await screen.findByLabelText('Home store of Blair Clerk')) as HTMLSelectElement;
+    await waitFor(() => expect(home.value).toBe(uuid(21)));
+    expect(home.selectedOptions[0]?.textContent).toBe('Fenwick Row');
+    nextWrite = { status: 200, body: { user: member(2, 'Blair Clerk', 'clerk', { homeLocationId: uuid(22) }) } };
+    fireEvent.change(home, { target: { value: uuid(22) } });
+    await waitFor(() => expect(sent).toEqual([{ method: 'PATCH', path: `/api/users/${uuid(2)}`, body: { homeLocationId: uuid(22) } }]));
+    expect(screen.queryByRole('dialog')).toBeNull();
+  });
+
   it('asks before a role change: Cancel changes nothing, confirming sends it', async () => {
-    renderTeam();
+    await renderTeam();
     const select = (await screen.findByLabelText('Role of Blair Clerk')) as HTMLSelectElement;
     fireEvent.change(select, { target: { value: 'buyer' } });
     let dialog = await screen.findByRole('dialog', { name: 'Make Blair Clerk a buyer?' });
@@ -195,7 +242,7 @@ describe('the team table (DataTable)', () => {
   });
 
   it('asks before disabling someone, keeps the dialog open with the reason when it fails, and never offers to disable oneself', async () => {
-    renderTeam();
+    await renderTeam();
     await screen.findByRole('table', { name: 'People' });
     const rowOf = (name: string) => screen.getByRole('cell', { name }).closest('tr') as HTMLElement;
     expect(within(rowOf('Avery Admin')).queryByRole('button', { name: 'Disable' })).toBeNull();

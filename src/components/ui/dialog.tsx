@@ -26,10 +26,11 @@ export function Dialog({ title, description, open, onOpenChange, trigger, childr
     <D.Root open={open} onOpenChange={onOpenChange}>
       {trigger && <D.Trigger asChild>{trigger}</D.Trigger>}
       <D.Portal>
-        <D.Overlay className="fixed inset-0 z-40 bg-ink/40" />
+        {/* Above a Sheet (z-50): a dialog opened from the part panel dims the panel too. */}
+        <D.Overlay className="fixed inset-0 z-60 bg-ink/40" />
         <D.Content
           {...(description ? {} : { 'aria-describedby': undefined })}
-          className="fixed top-1/2 left-1/2 z-50 max-h-[calc(100dvh-2rem)] w-[min(32rem,calc(100vw-2rem))] -translate-x-1/2 -translate-y-1/2 overflow-y-auto rounded-lg border border-ink/10 bg-paper-raised p-5 shadow-xl"
+          className="fixed top-1/2 left-1/2 z-60 max-h-[calc(100dvh-2rem)] w-[min(32rem,calc(100vw-2rem))] -translate-x-1/2 -translate-y-1/2 overflow-y-auto rounded-lg border border-ink/10 bg-paper-raised p-5 shadow-xl"
         >
           <D.Title className="text-lg font-semibold text-ink">{title}</D.Title>
           {description && <D.Description className="mt-1 text-[15px] text-ink-soft">{description}</D.Description>}

@@ -27,9 +27,8 @@ describe('progress of a large file', () => {
       finished = true;
       return res;
     });
-    const seen: { status: string; rowsDone: number; bytesRead: number; ms: number }[] = [];
+    const seen: { status: string; rowsDone: number; bytesRead: number }[] = [];
     while (!finished) {
-      const started = performance.now();
       const res = await buyer.agent.get(`/api/price-lists/${uploadId}`);
       if (res.status === 200) {
         const list = res.body as PriceList;
@@ -37,7 +36,6 @@ describe('progress of a large file', () => {
           status: list.status,
           rowsDone: list.progress.rowsDone,
           bytesRead: list.progress.bytesRead,
-          ms: performance.now() - started,
         });
       }
       await new Promise((r) => setTimeout(r, 20));
@@ -52,7 +50,8 @@ describe('progress of a large file', () => {
     // Rows done only grow.
     const rows = seen.map((s) => s.rowsDone);
     expect(rows).toEqual([...rows].sort((a, b) => a - b));
-    // The API answers while the file is read: no request waited for the whole import.
-    expect(Math.max(...seen.map((s) => s.ms))).toBeLessThan(1000);
+    // The API answers while the file is read: several answers came back at different points of the
+    // same import, so no request waited for the whole of it.
+    expect(new Set(midway.map((s) => s.rowsDone)).size, JSON.stringify(seen)).toBeGreaterThan(1);
   });
 });

@@ -12,6 +12,7 @@ import { orderHits } from '@/features/counter/order-hits';
 import { useDebouncedValue } from '@/features/counter/use-debounced-value';
 import { useSlashToSearch } from '@/features/counter/use-slash-to-search';
 import { PartSheet } from '@/features/parts/components/part-sheet';
+import { AskForPart } from '@/features/transfers/components/ask-for-part';
 import { EngineFitments } from '@/features/vehicles/components/engine-fitments';
 import { PartVerdict } from '@/features/vehicles/components/part-verdict';
 import { NO_VEHICLE, VehiclePicker, vehicleName, type VehicleChoice } from '@/features/vehicles/components/vehicle-picker';
@@ -75,6 +76,7 @@ export function CounterPage() {
   const searching = !isEmptySearch(search);
   const hits = useMemo(() => orderHits(results.data?.hits ?? []), [results.data]);
   const firstName = user.name.split(' ')[0] ?? user.name;
+  const canAskStores = user.role !== 'technician' && user.homeLocationId !== null;
 
   return (
     <>
@@ -156,6 +158,10 @@ export function CounterPage() {
         verdict={(part) => <PartVerdict part={part} engineId={engineId} onOpenPart={setOpenPartId} />}
         onOpenPart={setOpenPartId}
         onClose={() => setOpenPartId(null)}
+        stockActions={({ part, stock }) =>
+          // Only the store's staff with a home store ask for parts: the transfer comes to that store.
+          canAskStores && 'here' in stock ? <AskForPart part={part} elsewhere={stock.elsewhere} /> : null
+        }
       />
     </>
   );

@@ -32,6 +32,8 @@ export interface PartSheetProps {
   verdict: (part: PartSummary) => ReactNode;
   onOpenPart: (id: string) => void;
   onClose: () => void;
+  /** Under the stock line, composed by the page: what the reader may do about the stock (ask another store). */
+  stockActions?: (detail: PartDetail) => ReactNode;
 }
 
 /**
@@ -40,7 +42,7 @@ export interface PartSheetProps {
  * spec, its interchange numbers, its supersession chain and each supplier's prices. A part
  * opened from inside (an alternate, a chain link) replaces it in the same sheet.
  */
-export function PartSheet({ partId, engineId, typed, verdict, onOpenPart, onClose }: PartSheetProps) {
+export function PartSheet({ partId, engineId, typed, verdict, onOpenPart, onClose, stockActions }: PartSheetProps) {
   const detail = usePart(partId, engineId);
   const part = detail.data?.part;
   return (
@@ -51,7 +53,16 @@ export function PartSheet({ partId, engineId, typed, verdict, onOpenPart, onClos
     >
       {detail.isPending && <p className="text-ink-faint">Loading the part…</p>}
       <ErrorNote error={detail.error} />
-      {detail.data && <PartDetailBody detail={detail.data} engineId={engineId} typed={typed} verdict={verdict} onOpenPart={onOpenPart} />}
+      {detail.data && (
+        <PartDetailBody
+          detail={detail.data}
+          engineId={engineId}
+          typed={typed}
+          verdict={verdict}
+          onOpenPart={onOpenPart}
+          stockActions={stockActions}
+        />
+      )}
     </Sheet>
   );
 }
@@ -62,7 +73,8 @@ function PartDetailBody({
   typed,
   verdict,
   onOpenPart,
-}: Pick<PartSheetProps, 'engineId' | 'typed' | 'verdict' | 'onOpenPart'> & { detail: PartDetail }) {
+  stockActions,
+}: Pick<PartSheetProps, 'engineId' | 'typed' | 'verdict' | 'onOpenPart' | 'stockActions'> & { detail: PartDetail }) {
   const { part, spec, interchange, supersession, stock, price, prices, sellPriceBasis } = detail;
   const superseded = supersession.current.id !== part.id;
   return (
@@ -95,6 +107,7 @@ function PartDetailBody({
           </p>
         )}
       </div>
+      {stockActions?.(detail)}
       <Section title="Verdict">{verdict(part)}</Section>
       <Section title="Spec">{spec ? <SpecList spec={spec} /> : <p className="text-ink-soft">No spec on file.</p>}</Section>
       <Section title="Interchange">

@@ -1,3 +1,4 @@
+import type { Location } from '@shared/schemas/locations';
 import { inviteBodySchema } from '@shared/schemas/users';
 import { ROLES } from '@shared/roles';
 import { Button } from '@/components/ui/button';
@@ -5,9 +6,18 @@ import { Field, FieldSelect, Form, useSchemaForm } from '@/components/ui/form';
 import { useShops } from '../api/get-shops';
 import { useInviteUser } from '../api/invite-user';
 
+export interface InviteFormProps {
+  /** The chain's stores, for the home store of the store's staff (the page reads them). */
+  stores: readonly Pick<Location, 'id' | 'name'>[];
+  /** The store chosen at first: the inviting admin's own. */
+  defaultStoreId: string | null;
+}
+
 /** Invite someone by e-mail: checked with the API's own schema before it is sent. */
-export function InviteForm() {
-  const form = useSchemaForm(inviteBodySchema, { defaultValues: { name: '', email: '', role: 'clerk', shopId: null } });
+export function InviteForm({ stores, defaultStoreId }: InviteFormProps) {
+  const form = useSchemaForm(inviteBodySchema, {
+    defaultValues: { name: '', email: '', role: 'clerk', shopId: null, homeLocationId: defaultStoreId },
+  });
   const shops = useShops();
   const invite = useInviteUser();
   const role = form.watch('role');
@@ -17,14 +27,18 @@ export function InviteForm() {
     <Form
       form={form}
       serverError={invite.error}
-      onSubmit={(body) =>
+      onSubmit={({ homeLocationId, ...body }) =>
         invite.mutate(
-          { ...body, shopId: body.role === 'technician' ? body.shopId : null },
-          { onSuccess: () => form.reset({ name: '', email: '', role: body.role, shopId: body.shopId ?? null }) },
+          // A shop's technician has a shop and no home store; the store's staff the other way round.
+          body.role === 'technician' ? body : { ...body, shopId: null, homeLocationId },
+          {
+            onSuccess: () =>
+              form.reset({ name: '', email: '', role: body.role, shopId: body.shopId ?? null, homeLocationId: homeLocationId ?? null }),
+          },
         )
       }
       aria-label="Invite a user"
-      className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[repeat(4,minmax(0,1fr))_auto] lg:items-start"
+      className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[repeat(5,minmax(0,1fr))_auto] lg:items-start"
     >
       <Field name="name" label="Name" autoComplete="off" />
       <Field name="email" label="E-mail" type="email" autoComplete="off" />
@@ -37,11 +51,19 @@ export function InviteForm() {
         placeholder={technician ? 'Choose a shop' : '— (store staff)'}
         options={(shops.data ?? []).map((s) => ({ value: s.id, label: s.name }))}
       />
+      <FieldSelect
+        name="homeLocationId"
+        label="Home store"
+        blank="null"
+        disabled={technician}
+        placeholder={technician ? '— (a shop’s technician)' : 'The chain’s first store'}
+        options={stores.map((s) => ({ value: s.id, label: s.name }))}
+      />
       <Button type="submit" disabled={invite.isPending} className="lg:mt-5">
         Send invitation
       </Button>
       {invite.isSuccess && !form.formState.isDirty && (
-        <p className="text-sm text-go sm:col-span-2 lg:col-span-5" role="status">
+        <p className="text-sm text-go sm:col-span-2 lg:col-span-6" role="status">
           Invitation sent. The link works once, for 72 hours.
         </p>
       )}

@@ -1,6 +1,7 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { ROLES, type Role } from '@shared/roles';
+import type { Location } from '@shared/schemas/locations';
 import type { TeamMember } from '@shared/schemas/users';
 import { Button } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
@@ -19,13 +20,23 @@ function Status({ user }: { user: TeamMember }) {
   return <>active</>;
 }
 
+export interface TeamTableProps {
+  users: TeamMember[];
+  selfId: string;
+  /** The chain's stores, for each person's home store (the page reads them). */
+  stores: readonly Pick<Location, 'id' | 'name'>[];
+}
+
 /**
- * The people of the store and its shops, sortable by name and role. A role change or a
- * disable signs the person out at once, so each asks first; enabling does not.
+ * The people of the stores and the shops, sortable by name and role. A role change or a
+ * disable signs the person out at once, so each asks first; enabling does not, nor does moving
+ * someone to another home store (their next page shows that store's stock as "here").
  */
-export function TeamTable({ users, selfId }: { users: TeamMember[]; selfId: string }) {
+export function TeamTable({ users, selfId, stores }: TeamTableProps) {
   const update = useUpdateUser();
   const { mutate } = update;
+  // While a move is on its way, its select shows the store chosen rather than snapping back.
+  const moving = update.isPending && update.variables.homeLocationId ? update.variables : null;
   const [pending, setPending] = useState<Pending | null>(null);
 
   const columns = useMemo(
@@ -56,6 +67,34 @@ export function TeamTable({ users, selfId }: { users: TeamMember[]; selfId: stri
           </>
         ),
       }),
+      column.accessor((u) => stores.find((l) => l.id === u.homeLocationId)?.name ?? '', {
+        id: 'home',
+        header: 'Home store',
+        enableSorting: true,
+        cell: ({ row: { original: u } }) =>
+          u.role === 'technician' ? (
+            <span className="text-ink-soft">—</span>
+          ) : (
+            <>
+              <label className="sr-only" htmlFor={`home-${u.id}`}>
+                Home store of {u.name}
+              </label>
+              <select
+                id={`home-${u.id}`}
+                value={(moving?.id === u.id ? moving.homeLocationId : u.homeLocationId) ?? ''}
+                onChange={(e) => mutate({ id: u.id, homeLocationId: e.target.value })}
+                className="rounded border border-ink/20 bg-paper-raised px-2 py-1"
+              >
+                {u.homeLocationId === null && <option value="">—</option>}
+                {stores.map((l) => (
+                  <option key={l.id} value={l.id}>
+                    {l.name}
+                  </option>
+                ))}
+              </select>
+            </>
+          ),
+      }),
       column.accessor((u) => u.shopName ?? '—', { id: 'shop', header: 'Shop', meta: { cellClassName: 'text-ink-soft' } }),
       column.display({ id: 'status', header: 'Status', cell: ({ row }) => <Status user={row.original} /> }),
       column.display({
@@ -74,7 +113,7 @@ export function TeamTable({ users, selfId }: { users: TeamMember[]; selfId: stri
           ),
       }),
     ],
-    [selfId, mutate],
+    [selfId, mutate, stores, moving],
   );
 
   const name = pending?.user.name ?? '';

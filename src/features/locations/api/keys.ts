@@ -1,0 +1,3 @@
+export const locationKeys = {
+  all: ['locations'] as const,
+};

@@ -1,0 +1,3 @@
+export const transferKeys = {
+  all: ['transfers'] as const,
+};
