@@ -64,6 +64,13 @@ describe('the Catalog page', () => {
     await partForm.getByLabel('Part number').fill(partNumber);
     await partForm.getByLabel('Description').fill('Iridium plug, M14 × 1.25, 19 mm reach, 16 mm hex');
     await partForm.getByLabel('GTIN').fill(`${gtinBody}${(gtinCheckDigit(gtinBody) + 1) % 10}`);
+    // Leaving the field checks it: the message is beside it before anything is sent.
+    await partForm.getByLabel('GTIN').blur();
+    await partForm.getByText('The GTIN check digit is wrong').waitFor();
+    expect(await partForm.getByLabel('GTIN').getAttribute('aria-invalid')).toBe('true');
+    await s.shot('catalog-new-part-error');
+    await partForm.getByLabel('GTIN').fill(gtin);
+    await partForm.getByText('The GTIN check digit is wrong').waitFor({ state: 'detached' });
     await partForm.getByLabel('Add its plug spec now').check();
     await partForm.getByLabel('Thread (mm)', { exact: true }).fill('14');
     await partForm.getByLabel('Thread pitch (mm)').fill('1.25');
@@ -75,10 +82,6 @@ describe('the Catalog page', () => {
     await partForm.getByLabel('Resistor', { exact: true }).check();
     await partForm.getByLabel('Resistor value (kΩ)').fill('5');
     await partForm.getByLabel('Electrode').selectOption('iridium');
-    await partForm.getByRole('button', { name: 'Add part' }).click();
-    await partForm.getByText('the GTIN check digit is wrong').waitFor();
-    await s.shot('catalog-new-part-error');
-    await partForm.getByLabel('GTIN').fill(gtin);
     await partForm.getByRole('button', { name: 'Add part' }).click();
     const added = partForm.getByRole('status').filter({ hasText: 'Part added' });
     await added.waitFor();

@@ -88,7 +88,7 @@ describe('journey 7: sign-in and team', () => {
     await s.page.getByText(`Welcome, Robin Invitee (${email})`).waitFor();
     // The shared password rule speaks before anything is sent.
     await s.page.getByLabel('New password').fill('password123');
-    await s.page.getByText('The password is a common password or too close to one').waitFor();
+    await s.page.getByText('New password is a common password or too close to one').waitFor();
     expect(await s.page.getByRole('button', { name: 'Set password' }).isDisabled()).toBe(true);
     await s.page.getByLabel('New password').fill('robin-password-1');
     await s.page.getByLabel('Repeat password').fill('robin-password-1');

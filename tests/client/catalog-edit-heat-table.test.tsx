@@ -97,7 +97,7 @@ describe('the heat-table editor', () => {
     expect(form.textContent).toContain('By this table, a later letter is a colder plug.');
   });
 
-  it('marks a repeated code and a missing step on their rows and sends nothing', () => {
+  it('marks a repeated code and a missing step on their rows and sends nothing', async () => {
     const sent = stubApi(() => ({ status: 201, body: {} }));
     const form = renderForm();
     set(form, 'Brand name', 'Tamsin Plugs');
@@ -112,7 +112,7 @@ describe('the heat-table editor', () => {
     set(form, 'Heat step, row 3', '');
     fireEvent.click(within(form).getByRole('button', { name: 'Add brand' }));
     const row = (n: number) => input(form, `Heat code, row ${n}`).closest('tr')!;
-    expect(within(row(1)).getByText('this code is in the table twice')).toBeTruthy();
+    expect(await within(row(1)).findByText('this code is in the table twice')).toBeTruthy();
     expect(within(row(2)).getByText('this code is in the table twice')).toBeTruthy();
     expect(within(row(3)).getByText('choose a heat step')).toBeTruthy();
     expect(within(row(3)).queryByText('this code is in the table twice')).toBeNull();
@@ -165,7 +165,7 @@ describe('the heat-table editor', () => {
     set(form, 'Brand name', 'Quaywell');
     fireEvent.click(within(form).getByRole('button', { name: 'Add brand' }));
     const name = input(form, 'Brand name');
-    await waitFor(() => expect(within(name.closest('div')!).getByText('a brand by this name is already on file')).toBeTruthy());
+    await waitFor(() => expect(within(name.closest('div')!).getByText('A brand by this name is already on file')).toBeTruthy());
     expect(name.getAttribute('aria-invalid')).toBe('true');
   });
 });

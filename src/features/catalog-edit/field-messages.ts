@@ -42,3 +42,21 @@ export function unplacedError(error: unknown, shown: Record<string, string>, fie
   if (fields.some((f) => shown[f] !== undefined)) return null;
   return error instanceof Error ? error : new Error(String(error));
 }
+
+/**
+ * An API error as the kit's Form places it: a 409 on a known unique constraint, or a 400 that
+ * names its field only in its message, becomes the `{ field, message }` details Form puts beside
+ * that field. Anything else is passed on as it came.
+ */
+export function placedError(error: unknown): unknown {
+  if (!(error instanceof ApiError) || Object.keys(fieldErrorsOf(error)).length) return error;
+  // The same error gives the same object: Form places an error again whenever it changes.
+  let placed = PLACED.get(error);
+  if (!placed) {
+    const details = Object.entries(fieldMessages(error)).map(([field, message]) => ({ field, message }));
+    placed = details.length ? new ApiError(error.status, error.code, error.message, details) : error;
+    PLACED.set(error, placed);
+  }
+  return placed;
+}
+const PLACED = new WeakMap<ApiError, ApiError>();

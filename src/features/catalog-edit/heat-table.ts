@@ -1,9 +1,11 @@
+import { z } from 'zod';
 import { createBrandBodySchema, type CreateBrandBody } from '@shared/schemas/brands';
-import { HEAT_STEP_MAX, HEAT_STEP_MIN } from '@shared/schemas/specs';
+import { HEAT_STEP_MAX, HEAT_STEP_MIN, heatCodeSchema, heatStepSchema } from '@shared/schemas/specs';
+import { plainWords } from '@shared/validation/plain-words';
 
 /**
  * A brand's heat table as the buyer types it: one row per heat code, each mapped onto the store's
- * heat step (1 hottest … 15 coldest). Rows hold text; `parseBrand` checks them through the API's
+ * heat step (1 hottest … 15 coldest). Rows hold text; `brandFormSchema` checks them with the API's
  * own schema and points each problem at its row.
  */
 
@@ -29,58 +31,37 @@ export const HEAT_STEPS: readonly number[] = Array.from({ length: HEAT_STEP_MAX 
 
 const isBlank = (r: HeatRow) => r.code.trim() === '' && r.step === '';
 
-export interface BrandDraft {
-  name: string;
-  ours: boolean;
-  note: string;
-  rows: readonly HeatRow[];
-}
+/** The rows as typed; the form's schema checks them and turns them into the request's heat codes. */
+const heatRowSchema = z.object({ key: z.number(), code: z.string(), step: z.string() });
 
-export type BrandParse =
-  | { ok: true; body: CreateBrandBody }
-  | { ok: false; fields: Record<string, string>; rows: Record<number, RowErrors>; table: string | null };
+/**
+ * Each typed row checked where it stands, so every problem is said on its own row: a code left
+ * out, a step not chosen, a code too long or twice in the table. Blank rows are left out; the
+ * request's own rule for the whole table (createBrandBodySchema) has the last word.
+ */
+const heatTableSchema = z
+  .array(heatRowSchema)
+  .superRefine((rows, ctx) => {
+    const codes = rows.map((r) => r.code.trim());
+    rows.forEach((r, i) => {
+      if (isBlank(r)) return;
+      const code = codes[i]!;
+      if (code === '') ctx.addIssue({ code: 'custom', path: [i, 'code'], message: 'type the code' });
+      else if (codes.indexOf(code) !== codes.lastIndexOf(code))
+        ctx.addIssue({ code: 'custom', path: [i, 'code'], message: 'this code is in the table twice' });
+      else {
+        const checked = heatCodeSchema.safeParse(code, { error: plainWords });
+        if (!checked.success) ctx.addIssue({ code: 'custom', path: [i, 'code'], message: `the code ${checked.error.issues[0]!.message}` });
+      }
+      if (!heatStepSchema.safeParse(Number(r.step)).success)
+        ctx.addIssue({ code: 'custom', path: [i, 'step'], message: 'choose a heat step' });
+    });
+  })
+  .transform((rows): HeatCode[] => rows.filter((r) => !isBlank(r)).map((r) => ({ code: r.code.trim(), heatStep: Number(r.step) })))
+  .pipe(createBrandBodySchema.shape.heatCodes.unwrap());
 
-/** The draft as the API's body, or each problem by its field, its row (by key) or the whole table. */
-export function parseBrand(draft: BrandDraft): BrandParse {
-  const filled = draft.rows.filter((r) => !isBlank(r));
-  const input = {
-    name: draft.name,
-    ours: draft.ours,
-    heatCodeNote: draft.note.trim() === '' ? null : draft.note,
-    heatCodes: filled.map((r) => ({ code: r.code, heatStep: r.step === '' ? Number.NaN : Number(r.step) })),
-  };
-  const fields: Record<string, string> = {};
-  const rows: Record<number, RowErrors> = {};
-  let table: string | null = null;
-
-  // Point a repeated code at every row that holds it, not only at the table.
-  const byCode = new Map<string, HeatRow[]>();
-  for (const r of filled) {
-    const code = r.code.trim();
-    if (code) byCode.set(code, [...(byCode.get(code) ?? []), r]);
-  }
-  for (const same of byCode.values()) {
-    if (same.length > 1) for (const r of same) rows[r.key] = { ...rows[r.key], code: 'this code is in the table twice' };
-  }
-
-  const result = createBrandBodySchema.safeParse(input);
-  if (result.success && Object.keys(rows).length === 0) return { ok: true, body: result.data };
-  for (const issue of result.success ? [] : result.error.issues) {
-    const [head, index, field] = issue.path;
-    if (head === 'heatCodes' && typeof index === 'number') {
-      const row = filled[index];
-      if (!row) continue;
-      const which = field === 'heatStep' ? 'step' : 'code';
-      const message = which === 'step' ? 'choose a heat step' : row.code.trim() === '' ? 'type the code' : issue.message;
-      rows[row.key] = { [which]: message, ...rows[row.key] };
-    } else if (head === 'heatCodes') {
-      table ??= issue.code === 'too_big' ? 'at most 40 heat codes' : Object.keys(rows).length ? null : issue.message;
-    } else if (typeof head === 'string') {
-      fields[head] ??= head === 'name' && draft.name.trim() === '' ? 'required' : issue.message;
-    }
-  }
-  return { ok: false, fields, rows, table };
-}
+/** Adding a brand: the request's schema, with the heat table as the rows the buyer types. */
+export const brandFormSchema = createBrandBodySchema.extend({ heatCodes: heatTableSchema });
 
 export interface RunSpec {
   from: string;

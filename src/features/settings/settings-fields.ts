@@ -1,10 +1,11 @@
-import { DEFAULT_SETTINGS, settingsSchema, type Settings } from '@shared/schemas/settings';
-import { inFormWords, issuesByPath } from '@/components/ui/field-errors';
+import { get } from 'react-hook-form';
+import { DEFAULT_SETTINGS } from '@shared/schemas/settings';
 
 /**
  * The Settings form's fields: every compatibility threshold and load point and the price-list
  * settings, by their path in the settings document, with the unit each is kept in. Defaults are
- * read from shared/ (DEFAULT_SETTINGS), never written again here.
+ * read from shared/ (DEFAULT_SETTINGS), never written again here; the form checks them with the
+ * API's own schema (settingsSchema).
  */
 
 export interface SettingField {
@@ -107,59 +108,5 @@ export function loadPointPath(row: (typeof LOAD_POINT_ROWS)[number]['key'], colu
   return row === 'boost' && column === 'mapKpa' ? 'compat.loadPoints.boost.mapKpaAboveFull' : `compat.loadPoints.${row}.${column}`;
 }
 
-export const ALL_PATHS: string[] = [
-  ...SETTING_GROUPS.flatMap((g) => g.fields.map((f) => f.path)),
-  ...LOAD_POINT_ROWS.flatMap((r) => LOAD_POINT_COLUMNS.map((c) => loadPointPath(r.key, c.key))),
-];
-
-export type SettingsText = Record<string, string>;
-
-const LABEL_BY_KEY = new Map(SETTING_GROUPS.flatMap((g) => g.fields.map((f) => [f.path.split('.').pop()!, f.label] as const)));
-
-/** A schema message with the settings' labels for their names. */
-export const settingsMessage = (message: string): string => inFormWords(message, (key) => LABEL_BY_KEY.get(key));
-
-function get(obj: unknown, path: string): unknown {
-  return path
-    .split('.')
-    .reduce<unknown>((o, k) => (o !== null && typeof o === 'object' ? (o as Record<string, unknown>)[k] : undefined), obj);
-}
-
-function set(obj: Record<string, unknown>, path: string, value: unknown): void {
-  const keys = path.split('.');
-  let o = obj;
-  for (const k of keys.slice(0, -1)) {
-    const next = o[k];
-    o = (next !== null && typeof next === 'object' ? next : (o[k] = {})) as Record<string, unknown>;
-  }
-  o[keys[keys.length - 1]!] = value;
-}
-
 /** The settings' default at a path, as printed beside its field. */
 export const defaultAt = (path: string): string => String(get(DEFAULT_SETTINGS, path) ?? '');
-
-/** Settings as the form's text. */
-export function toText(settings: Settings): SettingsText {
-  return Object.fromEntries(ALL_PATHS.map((p) => [p, String(get(settings, p) ?? '')]));
-}
-
-export type SettingsParse = { ok: true; settings: Settings } | { ok: false; errors: Record<string, string> };
-
-/**
- * The form's text as settings, checked with the schema the API validates with. Starts from `base`
- * so a setting this form does not show yet keeps its value.
- */
-export function parseSettings(text: SettingsText, base: Settings): SettingsParse {
-  const doc = structuredClone(base) as unknown as Record<string, unknown>;
-  const errors: Record<string, string> = {};
-  for (const p of ALL_PATHS) {
-    const t = (text[p] ?? '').trim().replace(',', '.');
-    if (t === '') errors[p] = 'required';
-    else if (!Number.isFinite(Number(t))) errors[p] = 'not a number';
-    set(doc, p, t === '' ? Number.NaN : Number(t));
-  }
-  const r = settingsSchema.safeParse(doc);
-  if (r.success && Object.keys(errors).length === 0) return { ok: true, settings: r.data };
-  // Every field's problem at once; "required" and "not a number" say more than the schema's words.
-  return { ok: false, errors: { ...(r.success ? {} : issuesByPath(r.error)), ...errors } };
-}

@@ -1,27 +1,68 @@
-import { useState, type FormEvent } from 'react';
+import { useEffect, useMemo } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { PASSWORD_MIN_LENGTH } from '@shared/schemas/auth';
+import { z } from 'zod';
+import { acceptInviteBodySchema, PASSWORD_MIN_LENGTH, type AcceptInviteBody } from '@shared/schemas/auth';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { Field, Form, useSchemaForm } from '@/components/ui/form';
 import { ErrorNote } from '@/components/ui/panel';
 import { useAcceptInvite, useInvitation } from '@/features/auth/api/accept-invite';
-import { usePasswordProblem } from '@/features/auth/use-password-problem';
+import { usePasswordRule, type PasswordCheck } from '@/features/auth/use-password-rule';
 import { AuthCard } from './auth-card';
+
+/**
+ * The request's own schema plus what only this form asks: the password typed twice, and the shared
+ * password rule (it needs the invitee's e-mail), said before anything is sent.
+ */
+function setPasswordSchema(email: string, rule: { readonly current: PasswordCheck | null }) {
+  return acceptInviteBodySchema
+    .extend({ repeat: z.string() })
+    .superRefine((v, ctx) => {
+      const problem = rule.current?.(v.password, email);
+      if (problem) ctx.addIssue({ code: 'custom', path: ['password'], message: problem });
+      if (v.repeat !== v.password) ctx.addIssue({ code: 'custom', path: ['repeat'], message: 'must be the same as the new password' });
+    })
+    .transform(({ token, password }): AcceptInviteBody => ({ token, password }));
+}
+
+function SetPasswordForm({ token, email, accept }: { token: string; email: string; accept: ReturnType<typeof useAcceptInvite> }) {
+  const { rule, ready } = usePasswordRule();
+  const schema = useMemo(() => setPasswordSchema(email, rule), [email, rule]);
+  // Checked as it is typed: the rule speaks before the password is sent.
+  const form = useSchemaForm(schema, { mode: 'onChange', defaultValues: { token, password: '', repeat: '' } });
+  const { trigger, getFieldState } = form;
+  useEffect(() => {
+    if (ready && getFieldState('password').isDirty) void trigger('password');
+  }, [ready, trigger, getFieldState]);
+  const passwordRefused = form.formState.errors.password !== undefined;
+  return (
+    <Form
+      form={form}
+      onSubmit={(body) => accept.mutate(body)}
+      serverError={accept.error}
+      className="flex flex-col gap-4"
+      aria-label="Set your password"
+    >
+      <Field
+        name="password"
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        required
+        hint={`At least ${PASSWORD_MIN_LENGTH} characters, not your e-mail, not a common password.`}
+      />
+      <Field name="repeat" label="Repeat password" type="password" autoComplete="new-password" required />
+      <Button type="submit" disabled={accept.isPending || passwordRefused}>
+        Set password
+      </Button>
+    </Form>
+  );
+}
 
 export function AcceptInvitePage() {
   const [params] = useSearchParams();
   const token = params.get('token') ?? '';
   const invitation = useInvitation(token);
   const accept = useAcceptInvite();
-  const [password, setPassword] = useState('');
-  const [repeat, setRepeat] = useState('');
-  const mismatch = repeat.length > 0 && repeat !== password;
-  const problem = usePasswordProblem(password, invitation.data?.invitation.email ?? '');
-
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    if (!mismatch && !problem) accept.mutate({ token, password });
-  };
 
   if (accept.isSuccess) {
     return (
@@ -37,35 +78,12 @@ export function AcceptInvitePage() {
     <AuthCard title="Set your password">
       {invitation.isError && <ErrorNote error={invitation.error} />}
       {invitation.data && (
-        <form onSubmit={submit} className="flex flex-col gap-4">
+        <div className="flex flex-col gap-4">
           <p className="text-sm text-ink-soft">
             Welcome, {invitation.data.invitation.name} ({invitation.data.invitation.email}).
           </p>
-          <TextField
-            label="New password"
-            type="password"
-            autoComplete="new-password"
-            required
-            minLength={PASSWORD_MIN_LENGTH}
-            value={password}
-            onChange={(e) => setPassword(e.target.value)}
-            hint={`At least ${PASSWORD_MIN_LENGTH} characters, not your e-mail, not a common password.`}
-            error={problem ? `The password ${problem}.` : undefined}
-          />
-          <TextField
-            label="Repeat password"
-            type="password"
-            autoComplete="new-password"
-            required
-            value={repeat}
-            onChange={(e) => setRepeat(e.target.value)}
-            error={mismatch ? 'The two passwords differ.' : undefined}
-          />
-          <ErrorNote error={accept.error} />
-          <Button type="submit" disabled={accept.isPending || mismatch || problem !== null}>
-            Set password
-          </Button>
-        </form>
+          <SetPasswordForm token={token} email={invitation.data.invitation.email} accept={accept} />
+        </div>
       )}
     </AuthCard>
   );

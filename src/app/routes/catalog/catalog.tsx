@@ -22,7 +22,7 @@ const isView = (v: string | null): v is View => TABS.some((t) => t.value === v);
 
 function PartsView({ partId, open }: { partId: string | null; open: (id: string | null) => void }) {
   return (
-    <div className="grid grid-cols-1 items-start gap-4 xl:grid-cols-[20rem_minmax(0,1fr)]">
+    <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-4 xl:grid-cols-[20rem_minmax(0,1fr)]">
       <div className="xl:sticky xl:top-4">
         <Panel title="Find a part">
           <div className="flex flex-col gap-2">
@@ -98,7 +98,7 @@ export function CatalogPage() {
           </Panel>
         )}
         {view === 'brands' && (
-          <div className="grid grid-cols-1 items-start gap-4 xl:grid-cols-[minmax(0,1fr)_32rem]">
+          <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-4 xl:grid-cols-[minmax(0,1fr)_32rem]">
             <Panel title="Brands on file">
               <ErrorNote error={brands.error} />
               {brands.isPending ? <p className="text-ink-faint">Loading brands…</p> : <BrandList brands={brands.data ?? []} />}

@@ -1,8 +1,7 @@
-import { useState, type FormEvent } from 'react';
-import { API_KEY_NAME_MAX, API_KEY_SCOPES, type ApiKeyScope, type CreatedApiKey } from '@shared/schemas/api-keys';
+import { useState } from 'react';
+import { API_KEY_NAME_MAX, API_KEY_SCOPES, createApiKeyBodySchema, type CreatedApiKey } from '@shared/schemas/api-keys';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
-import { ErrorNote } from '@/components/ui/panel';
+import { Field, FieldSelect, Form, useSchemaForm } from '@/components/ui/form';
 import { useCreateApiKey } from '../api/create-api-key';
 import { SCOPE_LABELS } from '../scope-labels';
 
@@ -29,38 +28,25 @@ function NewKey({ created }: { created: CreatedApiKey }) {
   );
 }
 
+/** A key for another system: named and scoped on the API's own schema; the key itself is shown once below. */
 export function CreateKeyForm() {
-  const [name, setName] = useState('');
-  const [scope, setScope] = useState<ApiKeyScope>('read');
+  const form = useSchemaForm(createApiKeyBodySchema, { defaultValues: { name: '', scope: 'read' } });
   const create = useCreateApiKey();
-
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    create.mutate({ name, scope }, { onSuccess: () => setName('') });
-  };
   return (
     <div className="flex flex-col gap-3">
-      <form onSubmit={submit} className="grid gap-3 sm:grid-cols-[1fr_2fr_auto] sm:items-end" aria-label="Create an API key">
-        <TextField
-          label="Name"
-          required
-          maxLength={API_KEY_NAME_MAX}
-          placeholder="The system that will use it"
-          value={name}
-          onChange={(e) => setName(e.target.value)}
-        />
-        <SelectField label="Scope" value={scope} onChange={(e) => setScope(e.target.value as ApiKeyScope)}>
-          {API_KEY_SCOPES.map((s) => (
-            <option key={s} value={s}>
-              {SCOPE_LABELS[s]}
-            </option>
-          ))}
-        </SelectField>
-        <Button type="submit" disabled={create.isPending}>
+      <Form
+        form={form}
+        onSubmit={(body) => create.mutate(body, { onSuccess: () => form.reset({ name: '', scope: body.scope }) })}
+        serverError={create.error}
+        className="grid gap-3 sm:grid-cols-[1fr_2fr_auto] sm:items-start"
+        aria-label="Create an API key"
+      >
+        <Field name="name" label="Name" required maxLength={API_KEY_NAME_MAX} placeholder="The system that will use it" />
+        <FieldSelect name="scope" label="Scope" options={API_KEY_SCOPES.map((s) => ({ value: s, label: SCOPE_LABELS[s] }))} />
+        <Button type="submit" disabled={create.isPending} className="sm:mt-[22px]">
           Create key
         </Button>
-      </form>
-      <ErrorNote error={create.error} />
+      </Form>
       {create.data && <NewKey created={create.data} />}
     </div>
   );

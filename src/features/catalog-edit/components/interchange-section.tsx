@@ -1,21 +1,69 @@
-import { useState, type FormEvent } from 'react';
-import { createInterchangeBodySchema } from '@shared/schemas/interchange';
-import { issuesByPath } from '@/components/ui/field-errors';
-import { VerdictBadge } from '@/features/compat/components/verdict-badge';
-import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
-import { ErrorNote } from '@/components/ui/panel';
-import { useCreateInterchange } from '../api/create-interchange';
+import { createColumnHelper } from '@tanstack/react-table';
+import { useMemo, useState } from 'react';
+import { z } from 'zod';
+import { formatMeasure } from '@shared/format';
 import type { Brand } from '@shared/schemas/brands';
-import type { PartDetail } from '@shared/schemas/parts';
+import { createInterchangeBodySchema } from '@shared/schemas/interchange';
+import type { InterchangeRow, PartDetail } from '@shared/schemas/parts';
+import { Button } from '@/components/ui/button';
+import { DataTable } from '@/components/ui/data-table';
+import { Field, Form, useSchemaForm } from '@/components/ui/form';
+import { VerdictBadge } from '@/features/compat/components/verdict-badge';
+import { useCreateInterchange } from '../api/create-interchange';
 import type { Change } from '../changes';
-import { fieldMessages, unplacedError } from '../field-messages';
+import { placedError } from '../field-messages';
 import { ChangeNote } from './change-note';
 import { Section } from './section';
-import { formatMeasure } from '@shared/format';
 
-const FIELDS = ['brand', 'number', 'source', 'confidence'] as const;
 const SOURCES = ['manual', 'supplier catalogue', 'maker cross-reference', 'bench-checked'];
+
+// The buyer types how sure in percent; the request carries a fraction, held to the request's own limits.
+const rowFormSchema = createInterchangeBodySchema.extend({
+  confidence: z
+    .number()
+    .transform((pct) => pct / 100)
+    .refine((f) => createInterchangeBodySchema.shape.confidence.safeParse(f).success, 'must be a percentage from 0 to 100'),
+});
+
+const col = createColumnHelper<InterchangeRow>();
+const percent = (fraction: number) => formatMeasure(fraction * 100, '%');
+
+function InterchangeTable({ rows }: { rows: InterchangeRow[] }) {
+  const columns = useMemo(
+    () => [
+      col.accessor('brand', { header: 'Brand', enableSorting: true }),
+      col.accessor('number', {
+        header: 'Number',
+        enableSorting: true,
+        meta: { cellClassName: 'font-mono font-semibold whitespace-nowrap' },
+      }),
+      col.accessor('source', { header: 'Source', meta: { cellClassName: 'text-ink-soft' } }),
+      col.accessor('confidence', {
+        header: 'Sure',
+        enableSorting: true,
+        cell: ({ getValue }) => percent(getValue()),
+        meta: { align: 'right', cellClassName: 'whitespace-nowrap' },
+      }),
+      col.display({
+        id: 'verdict',
+        header: 'Verdict',
+        cell: ({ row: { original: r } }) =>
+          r.check ? <VerdictBadge verdict={r.check.verdict} /> : <span className="text-sm text-ink-faint">not judged</span>,
+      }),
+    ],
+    [],
+  );
+  return (
+    <DataTable
+      label="Interchange numbers"
+      data={rows}
+      columns={columns}
+      getRowId={(r) => r.id}
+      initialSorting={[{ id: 'brand', desc: false }]}
+      empty="No other brand’s number leads to this part yet."
+    />
+  );
+}
 
 /**
  * The other brands' numbers this part stands in for, and a row to add one: the foreign brand,
@@ -23,124 +71,45 @@ const SOURCES = ['manual', 'supplier catalogue', 'maker cross-reference', 'bench
  */
 export function InterchangeSection({ detail, brands }: { detail: PartDetail; brands: readonly Brand[] }) {
   const { part, interchange } = detail;
-  const [brand, setBrand] = useState('');
-  const [number, setNumber] = useState('');
-  const [source, setSource] = useState('manual');
-  const [confidence, setConfidence] = useState('100');
-  const [errors, setErrors] = useState<Record<string, string>>({});
+  const form = useSchemaForm(rowFormSchema, {
+    defaultValues: { brand: '', number: '', partId: part.id, source: 'manual', confidence: 100 },
+  });
   const [saved, setSaved] = useState<{ changes: Change[]; at: Date; number: string } | null>(null);
   const create = useCreateInterchange();
-  const server = fieldMessages(create.error);
-  const shown = { ...server, ...errors };
+  const { isDirty } = form.formState;
   const listId = `interchange-brands-${part.id}`;
-
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    create.reset();
-    const typed = confidence.trim().replace(',', '.');
-    const checked = createInterchangeBodySchema.safeParse({
-      brand,
-      number,
-      partId: part.id,
-      source: source.trim() === '' ? undefined : source,
-      confidence: typed === '' ? undefined : Number(typed) / 100,
-    });
-    if (!checked.success) {
-      const found = issuesByPath(checked.error);
-      if (found.brand) found.brand = brand.trim() === '' ? 'required' : found.brand;
-      if (found.number) found.number = number.trim() === '' ? 'required' : found.number;
-      if (found.confidence) found.confidence = 'a percentage from 0 to 100';
-      setErrors(found);
-      setSaved(null);
-      return;
-    }
-    setErrors({});
-    const body = checked.data;
-    create.mutate(body, {
-      onSuccess: () => {
-        setSaved({
-          at: new Date(),
-          number: body.number,
-          changes: [
-            {
-              what: 'Interchange',
-              from: '—',
-              to: `${body.brand} ${body.number} (${body.source}, ${formatMeasure(body.confidence * 100, '%')} sure)`,
-            },
-          ],
-        });
-        setNumber('');
-      },
-    });
-  };
 
   return (
     <Section title="Interchange">
-      {interchange.length === 0 ? (
-        <p className="text-[15px] text-ink-soft">No other brand&rsquo;s number leads to this part yet.</p>
-      ) : (
-        <table className="w-full text-left text-[15px]" aria-label="Interchange numbers">
-          <thead className="border-b border-ink/10 text-xs tracking-wide text-ink-soft uppercase">
-            <tr>
-              <th className="py-1 pr-3 font-semibold">Brand</th>
-              <th className="py-1 pr-3 font-semibold">Number</th>
-              <th className="py-1 pr-3 font-semibold">Source</th>
-              <th className="py-1 pr-3 text-right font-semibold">Sure</th>
-              <th className="py-1 font-semibold">Verdict</th>
-            </tr>
-          </thead>
-          <tbody>
-            {interchange.map((r) => (
-              <tr key={r.id} className="border-b border-ink/5 last:border-b-0">
-                <td className="py-1 pr-3">{r.brand}</td>
-                <td className="py-1 pr-3 font-mono font-semibold whitespace-nowrap">{r.number}</td>
-                <td className="py-1 pr-3 text-ink-soft">{r.source}</td>
-                <td className="py-1 pr-3 text-right whitespace-nowrap tabular-nums">{formatMeasure(r.confidence * 100, '%')}</td>
-                <td className="py-1">
-                  {r.check ? <VerdictBadge verdict={r.check.verdict} /> : <span className="text-sm text-ink-faint">not judged</span>}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      )}
+      <InterchangeTable rows={interchange} />
 
-      <form aria-label="Add an interchange row" onSubmit={submit} noValidate className="flex flex-col gap-2 border-t border-ink/10 pt-3">
+      <Form
+        form={form}
+        aria-label="Add an interchange row"
+        onSubmit={(body) =>
+          create.mutate(body, {
+            onSuccess: () => {
+              setSaved({
+                at: new Date(),
+                number: body.number,
+                changes: [
+                  { what: 'Interchange', from: '—', to: `${body.brand} ${body.number} (${body.source}, ${percent(body.confidence)} sure)` },
+                ],
+              });
+              // Brand, source and how sure often stay for the next number; the note goes once it is typed.
+              form.reset({ ...form.getValues(), number: '' });
+            },
+          })
+        }
+        serverError={placedError(create.error)}
+        className="flex flex-col gap-2 border-t border-ink/10 pt-3"
+      >
         <p className="text-xs font-semibold tracking-wide text-ink-soft uppercase">Add a number that leads here</p>
         <div className="grid items-start gap-x-3 gap-y-2 sm:grid-cols-2 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_minmax(0,1fr)_9rem_auto]">
-          <TextField
-            label="Foreign brand"
-            list={listId}
-            maxLength={80}
-            value={brand}
-            onChange={(e) => setBrand(e.target.value)}
-            error={shown.brand}
-          />
-          <TextField
-            label="Their number"
-            maxLength={60}
-            value={number}
-            onChange={(e) => setNumber(e.target.value)}
-            error={shown.number}
-            className="font-mono"
-            hint="as printed; spacing does not matter"
-          />
-          <TextField
-            label="Source"
-            list={`${listId}-sources`}
-            maxLength={60}
-            value={source}
-            onChange={(e) => setSource(e.target.value)}
-            error={shown.source}
-          />
-          <TextField
-            label="How sure (%)"
-            inputMode="decimal"
-            value={confidence}
-            onChange={(e) => setConfidence(e.target.value)}
-            error={shown.confidence}
-            hint="100: the maker's own"
-          />
+          <Field name="brand" label="Foreign brand" list={listId} maxLength={80} />
+          <Field name="number" label="Their number" maxLength={60} className="font-mono" hint="as printed; spacing does not matter" />
+          <Field name="source" label="Source" blank="absent" list={`${listId}-sources`} maxLength={60} />
+          <Field name="confidence" label="How sure (%)" number hint="100: the maker's own" />
           <Button type="submit" disabled={create.isPending} className="lg:mt-[22px]">
             {create.isPending ? 'Adding…' : 'Add interchange row'}
           </Button>
@@ -157,9 +126,8 @@ export function InterchangeSection({ detail, brands }: { detail: PartDetail; bra
             <option key={s} value={s} />
           ))}
         </datalist>
-        <ErrorNote error={unplacedError(create.error, server, FIELDS)} />
-      </form>
-      {saved && (
+      </Form>
+      {saved && !isDirty && (
         <ChangeNote title="Interchange row added" changes={saved.changes} at={saved.at}>
           <p className="mt-1 text-sm text-ink-soft">
             {part.ours

@@ -52,7 +52,7 @@ export function PartEditor({ partId, onOpenPart, onClose }: { partId: string; on
         </div>
       </Panel>
       <ErrorNote error={brands.error} />
-      <div className="grid items-start gap-4 lg:grid-cols-2">
+      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-4 lg:grid-cols-2">
         <div className="flex flex-col gap-4">
           <DetailsSection key={`d-${key}`} detail={detail.data} />
           <SupersessionSection key={`s-${key}`} detail={detail.data} onOpenPart={onOpenPart} />

@@ -1,127 +1,86 @@
-import { useId } from 'react';
-import type { PartKind } from '@shared/schemas/specs';
-import { SelectField, TextField } from '@/components/ui/field';
+import { useWatch } from 'react-hook-form';
 import type { Brand } from '@shared/schemas/brands';
-import { specFieldsFor, specMessage, type SpecValues } from '../spec-fields';
+import type { PartKind } from '@shared/schemas/specs';
+import { Field, FieldCheckbox, FieldSelect } from '@/components/ui/form';
+import { specFieldsFor } from '../spec-fields';
 
-function Checkbox({ label, checked, onChange }: { label: string; checked: boolean; onChange: (v: boolean) => void }) {
-  const id = useId();
+/** A plug's heat code, chosen from its brand's heat table, each code with the heat step it stands for. */
+function HeatCodeField({ name, heatCodes, brand }: { name: string; heatCodes: Brand['heatCodes']; brand: string }) {
+  const value: unknown = useWatch({ name });
+  const current = typeof value === 'string' ? value : '';
+  // A code on file that the table no longer holds is still shown, so saving other fields keeps it.
+  const unknown = current !== '' && !heatCodes.some((h) => h.code === current);
   return (
-    <div className="flex items-center gap-2">
-      <input id={id} type="checkbox" checked={checked} onChange={(e) => onChange(e.target.checked)} className="h-4 w-4 accent-accent" />
-      <label htmlFor={id} className="text-[15px] text-ink">
-        {label}
-      </label>
-    </div>
-  );
-}
-
-function HeatCodeField({
-  value,
-  heatCodes,
-  brand,
-  error,
-  onChange,
-}: {
-  value: string;
-  heatCodes: Brand['heatCodes'];
-  brand: string;
-  error: string | undefined;
-  onChange: (v: string) => void;
-}) {
-  const known = heatCodes.some((h) => h.code === value);
-  return (
-    <SelectField
+    <FieldSelect
+      name={name}
       label="Heat code"
-      value={value}
-      onChange={(e) => onChange(e.target.value)}
+      blank="absent"
       disabled={heatCodes.length === 0}
-      error={error}
+      placeholder={heatCodes.length ? 'Choose…' : 'no heat table'}
       hint={heatCodes.length ? `from ${brand}'s heat table` : `${brand} has no heat codes on file`}
-    >
-      <option value="">{heatCodes.length ? 'Choose…' : 'no heat table'}</option>
-      {!known && value !== '' && <option value={value}>{value} (not in the table)</option>}
-      {heatCodes.map((h) => (
-        <option key={h.code} value={h.code}>
-          {h.code} — heat step {h.heatStep}
-        </option>
-      ))}
-    </SelectField>
+      options={[
+        ...(unknown ? [{ value: current, label: `${current} (not in the table)` }] : []),
+        ...heatCodes.map((h) => ({ value: h.code, label: `${h.code} — heat step ${h.heatStep}` })),
+      ]}
+    />
   );
 }
 
 /**
- * Every spec field of a coil or a plug, each with its unit, as a group inside a form. A plug's
- * heat code is chosen from its brand's table, showing the heat step it stands for.
+ * Every spec field of a coil or a plug, each with its unit, bound to the enclosing Form under
+ * `prefix` ("plug." on a new part, "" on a spec form of its own). A plug's heat code is chosen
+ * from its brand's table.
  */
 export function SpecFields({
   kind,
-  values,
-  errors,
   brand,
-  onChange,
+  prefix = '',
 }: {
   kind: PartKind;
-  values: SpecValues;
-  errors: Record<string, string>;
   /** The part's brand: its heat table gives a plug's heat codes. */
   brand: Brand | null;
-  onChange: (values: SpecValues) => void;
+  prefix?: string;
 }) {
-  const set = (name: string, v: string | boolean) => onChange({ ...values, [name]: v });
   const fields = specFieldsFor(kind);
-  const boxes = fields.filter((f) => f.input === 'checkbox');
   return (
     <div className="flex flex-col gap-3">
       <div className="grid grid-cols-[repeat(auto-fill,minmax(11.5rem,1fr))] gap-x-3 gap-y-2.5">
         {fields.map((f) => {
-          const v = values[f.name];
-          const text = typeof v === 'string' ? v : '';
-          const raw = errors[f.name];
-          const error = raw === undefined ? undefined : specMessage(raw, f.name);
+          const name = `${prefix}${f.name}`;
           if (f.input === 'checkbox') return null;
           if (f.name === 'heatCode')
-            return (
-              <HeatCodeField
-                key={f.name}
-                value={text}
-                heatCodes={brand?.heatCodes ?? []}
-                brand={brand?.name ?? 'the brand'}
-                error={error}
-                onChange={(c) => set(f.name, c)}
-              />
-            );
+            return <HeatCodeField key={f.name} name={name} heatCodes={brand?.heatCodes ?? []} brand={brand?.name ?? 'the brand'} />;
           if (f.input === 'select')
             return (
-              <SelectField key={f.name} label={f.label} value={text} onChange={(e) => set(f.name, e.target.value)} error={error}>
-                {(f.options ?? []).map((o) => (
-                  <option key={o} value={o}>
-                    {o}
-                  </option>
-                ))}
-              </SelectField>
+              <FieldSelect
+                key={f.name}
+                name={name}
+                label={f.label}
+                options={(f.options ?? []).map((o) => ({ value: o, label: f.words?.[o] ?? o }))}
+              />
             );
+          const number = f.input !== 'text';
           return (
-            <TextField
+            <Field
               key={f.name}
+              name={name}
               label={f.label}
               unit={f.unit}
+              number={number}
               inputMode={f.input === 'text' ? 'text' : f.input === 'integer' ? 'numeric' : 'decimal'}
-              value={text}
-              onChange={(e) => set(f.name, e.target.value)}
+              blank={f.optional ? 'null' : number ? 'absent' : 'keep'}
               hint={f.hint ?? (f.optional ? 'optional' : undefined)}
-              error={error}
             />
           );
         })}
       </div>
-      {boxes.length > 0 && (
-        <div className="flex flex-wrap gap-x-6 gap-y-1.5">
-          {boxes.map((f) => (
-            <Checkbox key={f.name} label={f.label} checked={values[f.name] === true} onChange={(c) => set(f.name, c)} />
+      <div className="flex flex-wrap gap-x-6 gap-y-1.5">
+        {fields
+          .filter((f) => f.input === 'checkbox')
+          .map((f) => (
+            <FieldCheckbox key={f.name} name={`${prefix}${f.name}`} label={f.label} />
           ))}
-        </div>
-      )}
+      </div>
     </div>
   );
 }

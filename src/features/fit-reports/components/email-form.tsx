@@ -1,44 +1,37 @@
-import { useState, type FormEvent } from 'react';
+import { emailFitReportBodySchema } from '@shared/schemas/fit-reports';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
-import { fieldErrorsOf } from '@/components/ui/field-errors';
+import { Field, Form, useResultIsCurrent, useSchemaForm } from '@/components/ui/form';
 import { useEmailFitReport } from '../api/email-fit-report';
 
 /** E-mails the report (its verdict rows and the share link) to a customer or a colleague. */
 export function EmailForm({ reportId }: { reportId: string }) {
-  const [to, setTo] = useState('');
-  const [sentTo, setSentTo] = useState<string | null>(null);
+  const form = useSchemaForm(emailFitReportBodySchema, { defaultValues: { to: '' } });
   const email = useEmailFitReport();
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    const address = to.trim();
-    email.mutate({ id: reportId, to: address }, { onSuccess: () => setSentTo(address) });
-  };
-  const fieldError = fieldErrorsOf(email.error).to ?? email.error?.message;
+  // "Sent to …" speaks of the address in the box: it goes the moment the address is changed.
+  const { isCurrent, shown } = useResultIsCurrent(form);
+  const sentTo = email.isSuccess && isCurrent ? email.variables.to : null;
   return (
-    <form aria-label="E-mail the fit report" onSubmit={submit} className="flex flex-col gap-2">
-      <div className="flex items-end gap-2">
-        <div className="flex-1">
-          <TextField
-            label="E-mail to"
-            type="email"
-            required
-            value={to}
-            onChange={(e) => {
-              setTo(e.target.value);
-              setSentTo(null);
-            }}
-            placeholder="name@example.com"
-            error={fieldError}
-          />
+    <Form
+      form={form}
+      aria-label="E-mail the fit report"
+      onSubmit={({ to }) => {
+        shown();
+        email.mutate({ id: reportId, to });
+      }}
+      serverError={email.error}
+      className="flex flex-col gap-2"
+    >
+      <div className="flex items-start gap-2">
+        <div className="min-w-0 flex-1">
+          <Field name="to" label="E-mail to" type="email" required placeholder="name@example.com" />
         </div>
-        <Button type="submit" disabled={email.isPending || to.trim() === ''}>
+        <Button type="submit" disabled={email.isPending} className="mt-[22px]">
           {email.isPending ? 'Sending…' : 'Send'}
         </Button>
       </div>
       <p role="status" className="min-h-4 text-sm text-go">
         {sentTo ? `Sent to ${sentTo}.` : ''}
       </p>
-    </form>
+    </Form>
   );
 }

@@ -1,133 +1,128 @@
-import { useId, useState, type FormEvent } from 'react';
-import { DEFAULT_SETTINGS, type Settings } from '@shared/schemas/settings';
-import { fieldErrorsOf } from '@/components/ui/field-errors';
+import { createColumnHelper } from '@tanstack/react-table';
+import { useEffect, useMemo, useRef } from 'react';
+import { useFormContext, useWatch, type FieldErrors } from 'react-hook-form';
+import { DEFAULT_SETTINGS, settingsSchema, type Settings } from '@shared/schemas/settings';
 import { Button } from '@/components/ui/button';
+import { DataTable } from '@/components/ui/data-table';
+import { controlClass } from '@/components/ui/field';
+import { Field, Form, FormFieldFrame, useSchemaForm } from '@/components/ui/form';
 import { Panel } from '@/components/ui/panel';
-import {
-  defaultAt,
-  settingsMessage,
-  LOAD_POINT_COLUMNS,
-  LOAD_POINT_ROWS,
-  loadPointPath,
-  parseSettings,
-  SETTING_GROUPS,
-  toText,
-  type SettingField,
-  type SettingsText,
-} from '../settings-fields';
+import { defaultAt, LOAD_POINT_COLUMNS, LOAD_POINT_ROWS, loadPointPath, SETTING_GROUPS, type SettingField } from '../settings-fields';
 
-function NumberSetting({
-  field,
-  value,
-  error,
-  onChange,
-}: {
-  field: SettingField;
-  value: string;
-  error: string | undefined;
-  onChange: (v: string) => void;
-}) {
-  const id = useId();
-  const changed = value.trim() !== defaultAt(field.path);
+/** The default beside a figure, and whether the figure on screen differs from it. */
+function DefaultNote({ path, unit, extra }: { path: string; unit?: string; extra?: string | undefined }) {
+  const value: unknown = useWatch({ name: path });
+  const changed = typeof value === 'number' && value !== Number(defaultAt(path));
   return (
-    <div className="grid grid-cols-[minmax(0,1fr)_8rem] items-start gap-x-3 gap-y-0.5 border-b border-ink/10 py-2 last:border-b-0">
-      <div>
-        <label htmlFor={id} className="text-[15px] font-medium text-ink">
-          {field.label}
-          {field.unit && <span className="font-normal text-ink-soft"> ({field.unit})</span>}
-        </label>
-        <p className="text-xs text-ink-faint">
-          default {defaultAt(field.path)}
-          {field.unit ? ` ${field.unit}` : ''}
-          {changed && <span className="ml-1 font-semibold text-accent">· changed</span>}
-          {field.hint ? ` · ${field.hint}` : ''}
-        </p>
-      </div>
-      <div>
-        <input
-          id={id}
-          inputMode="decimal"
-          value={value}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={error ? `${id}-error` : undefined}
-          onChange={(e) => onChange(e.target.value)}
-          className={`w-full rounded-md border bg-paper-raised px-2.5 py-1.5 text-right text-[15px] tabular-nums text-ink focus:border-accent ${error ? 'border-nogo' : 'border-ink/20'}`}
-        />
-      </div>
-      {error && (
-        <p id={`${id}-error`} className="col-span-2 text-sm text-nogo">
-          {error}
-        </p>
-      )}
+    <>
+      default {defaultAt(path)}
+      {unit ? ` ${unit}` : ''}
+      {changed && <span className="ml-1 font-semibold text-accent">· changed</span>}
+      {extra ? ` · ${extra}` : ''}
+    </>
+  );
+}
+
+function NumberSetting({ field }: { field: SettingField }) {
+  return (
+    <Field
+      name={field.path}
+      label={field.label}
+      unit={field.unit || undefined}
+      number
+      className="text-right"
+      hint={<DefaultNote path={field.path} unit={field.unit} extra={field.hint} />}
+    />
+  );
+}
+
+type LoadPointRow = (typeof LOAD_POINT_ROWS)[number];
+const col = createColumnHelper<LoadPointRow>();
+
+/** Each load point's three figures, one row per engine condition. */
+function LoadPointTable() {
+  const columns = useMemo(
+    () => [
+      col.display({
+        id: 'point',
+        header: 'Load point',
+        meta: { cellClassName: 'font-medium text-ink' },
+        cell: ({ row: { original: r } }) => (
+          <>
+            {r.label}
+            {r.key === 'boost' && <p className="text-xs font-normal text-ink-faint">only where the engine has boost</p>}
+          </>
+        ),
+      }),
+      ...LOAD_POINT_COLUMNS.map((c) =>
+        col.display({
+          id: c.key,
+          header: () => (
+            <>
+              {c.label} <span className="normal-case">({c.unit})</span>
+            </>
+          ),
+          cell: ({ row: { original: r } }) => {
+            const path = loadPointPath(r.key, c.key);
+            const aboveFull = r.key === 'boost' && c.key === 'mapKpa';
+            return (
+              // The column header shows what the figure is; the field's own label is for screen readers and messages.
+              <div className="w-32 [&_label]:sr-only">
+                <Field
+                  name={path}
+                  label={`${r.label}: ${aboveFull ? 'pressure above full load plus peak boost' : c.label.toLowerCase()}`}
+                  unit={c.unit}
+                  number
+                  className="text-right"
+                  hint={<DefaultNote path={path} extra={aboveFull ? 'above full + boost' : undefined} />}
+                />
+              </div>
+            );
+          },
+        }),
+      ),
+    ],
+    [],
+  );
+  return <DataTable label="Load points" data={[...LOAD_POINT_ROWS]} columns={columns} getRowId={(r) => r.key} />;
+}
+
+/** The store's name and contact, as printed on fit reports and shown on their share page. */
+function StoreFields() {
+  const { register } = useFormContext<Settings>();
+  return (
+    <div className="grid gap-3 sm:grid-cols-2">
+      <Field name="store.name" label="Store name" maxLength={120} autoComplete="organization" />
+      <Field name="store.phone" label="Phone" type="tel" maxLength={40} autoComplete="tel" />
+      <FormFieldFrame name="store.address" label="Address" hint="Line breaks are kept." className="sm:col-span-2">
+        {(ids) => (
+          <textarea
+            rows={3}
+            maxLength={300}
+            {...register('store.address')}
+            {...ids}
+            className={controlClass(ids['aria-invalid'] && 'invalid')}
+          />
+        )}
+      </FormFieldFrame>
     </div>
   );
 }
 
-function LoadPointGrid({
-  text,
-  errorOf,
-  onChange,
-}: {
-  text: SettingsText;
-  errorOf: (p: string) => string | undefined;
-  onChange: (p: string, v: string) => void;
-}) {
-  return (
-    <div className="overflow-x-auto">
-      <table className="w-full border-collapse text-[15px]">
-        <thead>
-          <tr className="border-b border-ink/15 text-left text-xs font-semibold uppercase tracking-wide text-ink-soft">
-            <th scope="col" className="py-1.5 pr-3">
-              Load point
-            </th>
-            {LOAD_POINT_COLUMNS.map((c) => (
-              <th key={c.key} scope="col" className="py-1.5 pr-3">
-                {c.label} <span className="font-normal normal-case">({c.unit})</span>
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {LOAD_POINT_ROWS.map((r) => (
-            <tr key={r.key} className="border-b border-ink/10 align-top">
-              <th scope="row" className="py-2 pr-3 text-left font-medium text-ink">
-                {r.label}
-                {r.key === 'boost' && <p className="text-xs font-normal text-ink-faint">only where the engine has boost</p>}
-              </th>
-              {LOAD_POINT_COLUMNS.map((c) => {
-                const path = loadPointPath(r.key, c.key);
-                const error = errorOf(path);
-                const label = `${r.label}: ${r.key === 'boost' && c.key === 'mapKpa' ? 'pressure above full load plus peak boost' : c.label.toLowerCase()} (${c.unit})`;
-                return (
-                  <td key={c.key} className="py-2 pr-3">
-                    <input
-                      aria-label={label}
-                      inputMode="decimal"
-                      value={text[path] ?? ''}
-                      aria-invalid={error ? true : undefined}
-                      onChange={(e) => onChange(path, e.target.value)}
-                      className={`w-28 rounded-md border bg-paper-raised px-2.5 py-1.5 text-right tabular-nums text-ink focus:border-accent ${error ? 'border-nogo' : 'border-ink/20'}`}
-                    />
-                    <p className="text-xs text-ink-faint">
-                      default {defaultAt(path)}
-                      {r.key === 'boost' && c.key === 'mapKpa' ? ' above full + boost' : ''}
-                    </p>
-                    {error && <p className="text-sm text-nogo">{error}</p>}
-                  </td>
-                );
-              })}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
-  );
+/** How many fields carry a message. */
+function countErrors(errors: FieldErrors): number {
+  let n = 0;
+  for (const value of Object.values(errors)) {
+    if (value === null || typeof value !== 'object') continue;
+    n += typeof (value as { message?: unknown }).message === 'string' ? 1 : countErrors(value as FieldErrors);
+  }
+  return n;
 }
 
 /**
- * Every threshold and load point of the compatibility model and the price-list settings, grouped,
- * each with its unit and its default. Checked with the API's own schema before it is sent; the
- * API's field messages are shown by their fields too.
+ * Every threshold and load point of the compatibility model, the price-list settings and the
+ * store's details, grouped, each figure with its unit and its default. Checked with the API's
+ * own schema before it is sent; the API's field messages are shown by their fields too.
  */
 export function SettingsForm({
   initial,
@@ -142,49 +137,37 @@ export function SettingsForm({
   saved: boolean;
   onSave: (settings: Settings) => void;
 }) {
-  const [text, setText] = useState<SettingsText>(() => toText(initial));
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [dirty, setDirty] = useState(false);
-  const server = fieldErrorsOf(saveError, 'settings');
-  const errorOf = (path: string): string | undefined => {
-    const message = errors[path] ?? (dirty ? undefined : server[path]);
-    return message === undefined ? undefined : settingsMessage(message);
-  };
-  const change = (path: string, v: string) => {
-    setText((t) => ({ ...t, [path]: v }));
-    setErrors((e) => {
-      const { [path]: _gone, ...rest } = e;
-      return rest;
-    });
-    setDirty(true);
-  };
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    const r = parseSettings(text, initial);
-    if (!r.ok) {
-      setErrors(r.errors);
-      return;
-    }
-    setErrors({});
-    setDirty(false);
-    onSave(r.settings);
-  };
-  const problems = Object.keys(errors).length + (dirty ? 0 : Object.keys(server).length);
-  const unplacedServerError = saveError instanceof Error && Object.keys(server).length === 0 && !dirty ? saveError.message : null;
+  const form = useSchemaForm(settingsSchema, { defaultValues: initial });
+  const { reset, getValues } = form;
+  // Settings newly saved become what the form compares against ("Unsaved changes").
+  const shownFor = useRef(initial);
+  useEffect(() => {
+    if (shownFor.current === initial) return;
+    shownFor.current = initial;
+    reset(initial);
+  }, [initial, reset]);
+  const { isDirty, errors, submitCount } = form.formState;
+  const problems = submitCount > 0 || saveError ? countErrors(errors) : 0;
 
   return (
-    <form aria-label="Settings" onSubmit={submit} noValidate className="flex flex-col gap-4">
+    <Form
+      form={form}
+      aria-label="Settings"
+      onSubmit={onSave}
+      serverError={saveError}
+      serverFieldPrefix="settings"
+      className="flex flex-col gap-4"
+    >
       <div className="sticky top-0 z-10 flex flex-wrap items-center gap-3 rounded-lg border border-ink/10 bg-paper/95 px-4 py-2 backdrop-blur">
         <Button type="submit" disabled={saving}>
           {saving ? 'Saving…' : 'Save settings'}
         </Button>
         <Button
           variant="secondary"
-          onClick={() => {
-            setText(toText(DEFAULT_SETTINGS));
-            setErrors({});
-            setDirty(true);
-          }}
+          onClick={() =>
+            // The thresholds and load points go back to the model's defaults; the store stays the store.
+            reset({ ...DEFAULT_SETTINGS, store: getValues('store') }, { keepDefaultValues: true })
+          }
         >
           Fill in the defaults
         </Button>
@@ -193,32 +176,28 @@ export function SettingsForm({
             <span className="font-medium text-nogo">
               {problems} field{problems === 1 ? '' : 's'} need{problems === 1 ? 's' : ''} attention: nothing was saved.
             </span>
-          ) : saved && !dirty ? (
+          ) : saved && !isDirty ? (
             <span className="font-medium text-go">Saved. New comparisons use these values.</span>
-          ) : dirty ? (
+          ) : isDirty ? (
             <span className="text-ink-soft">Unsaved changes.</span>
           ) : null}
         </p>
-        {unplacedServerError && (
-          <p role="alert" className="basis-full text-sm text-nogo">
-            {unplacedServerError}
-          </p>
-        )}
       </div>
+
+      <Panel title="Store">
+        <p className="mb-3 text-sm text-ink-soft">The name and contact printed on fit reports and shown on their share page.</p>
+        <StoreFields />
+      </Panel>
 
       <div className="grid gap-4 lg:grid-cols-2">
         {SETTING_GROUPS.map((g) => (
           <Panel key={g.id} title={g.title}>
-            {g.note && <p className="mb-1 text-sm text-ink-soft">{g.note}</p>}
-            {g.fields.map((f) => (
-              <NumberSetting
-                key={f.path}
-                field={f}
-                value={text[f.path] ?? ''}
-                error={errorOf(f.path)}
-                onChange={(v) => change(f.path, v)}
-              />
-            ))}
+            {g.note && <p className="mb-3 text-sm text-ink-soft">{g.note}</p>}
+            <div className="grid grid-cols-[repeat(auto-fill,minmax(13rem,1fr))] gap-x-4 gap-y-3">
+              {g.fields.map((f) => (
+                <NumberSetting key={f.path} field={f} />
+              ))}
+            </div>
           </Panel>
         ))}
       </div>
@@ -228,8 +207,8 @@ export function SettingsForm({
           The engine conditions at which required and available secondary voltage are compared. Boost&rsquo;s pressure is full load&rsquo;s
           plus the engine&rsquo;s peak boost plus the figure here.
         </p>
-        <LoadPointGrid text={text} errorOf={errorOf} onChange={change} />
+        <LoadPointTable />
       </Panel>
-    </form>
+    </Form>
   );
 }

@@ -1,55 +1,35 @@
-import { useState, type FormEvent } from 'react';
+import { createSupplierBodySchema } from '@shared/schemas/suppliers';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
-import { ErrorNote } from '@/components/ui/panel';
+import { Field, Form, useSchemaForm } from '@/components/ui/form';
 import { useCreateSupplier } from '../api/create-supplier';
 
-const blankToUndefined = (s: string): string | undefined => (s.trim() === '' ? undefined : s.trim());
+const EMPTY = { name: '', key: undefined, contactEmail: null, phone: null };
 
 /** Adds a supplier; only the name is needed, the key is made from it when left empty. */
 export function SupplierForm() {
-  const [name, setName] = useState('');
-  const [key, setKey] = useState('');
-  const [contactEmail, setContactEmail] = useState('');
-  const [phone, setPhone] = useState('');
+  const form = useSchemaForm(createSupplierBodySchema, { defaultValues: EMPTY });
   const create = useCreateSupplier();
-
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    create.mutate(
-      { name: name.trim(), key: blankToUndefined(key), contactEmail: blankToUndefined(contactEmail), phone: blankToUndefined(phone) },
-      {
-        onSuccess: () => {
-          setName('');
-          setKey('');
-          setContactEmail('');
-          setPhone('');
-        },
-      },
-    );
-  };
-
   return (
-    <form
-      onSubmit={submit}
+    <Form
+      form={form}
+      onSubmit={(body) => create.mutate(body, { onSuccess: () => form.reset(EMPTY) })}
+      serverError={create.error}
       aria-label="Add a supplier"
       className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[2fr_1fr_2fr_1fr_auto] lg:items-start"
     >
-      <TextField label="Name" required maxLength={120} value={name} onChange={(e) => setName(e.target.value)} />
-      <TextField label="Key" maxLength={40} value={key} onChange={(e) => setKey(e.target.value)} hint="Made from the name if left empty" />
-      <TextField label="Contact e-mail" type="email" value={contactEmail} onChange={(e) => setContactEmail(e.target.value)} />
-      <TextField label="Phone" type="tel" maxLength={40} value={phone} onChange={(e) => setPhone(e.target.value)} />
+      <Field name="name" label="Name" required maxLength={120} />
+      <Field name="key" label="Key" blank="absent" maxLength={40} hint="Made from the name if left empty" />
+      <Field name="contactEmail" label="Contact e-mail" type="email" blank="null" />
+      <Field name="phone" label="Phone" type="tel" blank="null" maxLength={40} />
       <Button type="submit" disabled={create.isPending} className="lg:mt-[22px]">
         Add supplier
       </Button>
-      <div className="sm:col-span-2 lg:col-span-5">
-        <ErrorNote error={create.error} />
-        {create.isSuccess && (
-          <p role="status" className="text-sm text-go">
-            Added {create.data.name}.
-          </p>
-        )}
-      </div>
-    </form>
+      {/* Said only while the form is as the add left it: typing the next supplier takes it away. */}
+      {create.isSuccess && !form.formState.isDirty && (
+        <p role="status" className="text-sm text-go sm:col-span-2 lg:col-span-5">
+          Added {create.data.name}.
+        </p>
+      )}
+    </Form>
   );
 }

@@ -1,92 +1,61 @@
-import { useState, type FormEvent } from 'react';
-import { Button } from '@/components/ui/button';
-import { ConfirmDialog } from '@/components/ui/dialog';
-import { ErrorNote } from '@/components/ui/panel';
-import { useUpdateSupplier } from '../api/update-supplier';
-import type { Supplier } from '@shared/schemas/suppliers';
+import { createColumnHelper } from '@tanstack/react-table';
+import { useMemo, useState } from 'react';
+import { updateSupplierBodySchema, type Supplier } from '@shared/schemas/suppliers';
 import { formatDate } from '@shared/format';
-
-const CELL_INPUT = 'w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 text-[15px] focus:border-accent';
+import { Button } from '@/components/ui/button';
+import { DataTable } from '@/components/ui/data-table';
+import { ConfirmDialog, Dialog } from '@/components/ui/dialog';
+import { Field, Form, useSchemaForm } from '@/components/ui/form';
+import { useUpdateSupplier } from '../api/update-supplier';
 
 const lastList = (iso: string | null): string => (iso === null ? 'none yet' : formatDate(iso));
 
-const blankToNull = (s: string): string | null => (s.trim() === '' ? null : s.trim());
-
-function EditRow({ supplier, onDone }: { supplier: Supplier; onDone: () => void }) {
-  const [name, setName] = useState(supplier.name);
-  const [key, setKey] = useState(supplier.key);
-  const [contactEmail, setContactEmail] = useState(supplier.contactEmail ?? '');
-  const [phone, setPhone] = useState(supplier.phone ?? '');
+/** A supplier's name, key and contact, edited in a dialog on the API's own schema. */
+function EditSupplierForm({ supplier, onDone }: { supplier: Supplier; onDone: () => void }) {
+  const form = useSchemaForm(updateSupplierBodySchema, {
+    defaultValues: { name: supplier.name, key: supplier.key, contactEmail: supplier.contactEmail, phone: supplier.phone },
+  });
   const update = useUpdateSupplier();
-  const formId = `edit-supplier-${supplier.id}`;
-
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    update.mutate(
-      { id: supplier.id, name: name.trim(), key: key.trim(), contactEmail: blankToNull(contactEmail), phone: blankToNull(phone) },
-      { onSuccess: onDone },
-    );
-  };
-
   return (
-    <tr className="border-b border-ink/5 bg-accent-soft/40 align-top">
-      <td className="py-2 pr-3">
-        {/* The form lives in the first cell; the other inputs join it through form=. */}
-        <form id={formId} onSubmit={submit} aria-label={`Edit ${supplier.name}`} />
-        <input
-          form={formId}
-          aria-label="Name"
-          required
-          maxLength={120}
-          className={CELL_INPUT}
-          value={name}
-          onChange={(e) => setName(e.target.value)}
-          autoFocus
-        />
-        <ErrorNote error={update.error} />
-      </td>
-      <td className="py-2 pr-3">
-        <input
-          form={formId}
-          aria-label="Key"
-          required
-          maxLength={40}
-          className={CELL_INPUT}
-          value={key}
-          onChange={(e) => setKey(e.target.value)}
-        />
-      </td>
-      <td className="py-2 pr-3">
-        <input
-          form={formId}
-          aria-label="Contact e-mail"
-          type="email"
-          className={CELL_INPUT}
-          value={contactEmail}
-          onChange={(e) => setContactEmail(e.target.value)}
-        />
-      </td>
-      <td className="py-2 pr-3">
-        <input
-          form={formId}
-          aria-label="Phone"
-          type="tel"
-          maxLength={40}
-          className={CELL_INPUT}
-          value={phone}
-          onChange={(e) => setPhone(e.target.value)}
-        />
-      </td>
-      <td className="whitespace-nowrap py-2 pr-3 text-ink-soft">{lastList(supplier.lastPriceListAt)}</td>
-      <td className="whitespace-nowrap py-2 text-right">
-        <Button type="submit" form={formId} disabled={update.isPending}>
-          Save
-        </Button>{' '}
-        <Button variant="ghost" onClick={onDone}>
+    <Form
+      form={form}
+      onSubmit={(body) => update.mutate({ id: supplier.id, ...body }, { onSuccess: onDone })}
+      serverError={update.error}
+      aria-label={`Edit ${supplier.name}`}
+      className="flex flex-col gap-3"
+    >
+      <Field name="name" label="Name" required maxLength={120} autoFocus />
+      <Field name="key" label="Key" required maxLength={40} hint="Lower-case letters, digits and dashes" />
+      <Field name="contactEmail" label="Contact e-mail" type="email" blank="null" />
+      <Field name="phone" label="Phone" type="tel" blank="null" maxLength={40} />
+      <div className="mt-2 flex flex-wrap justify-end gap-2">
+        <Button variant="secondary" onClick={onDone}>
           Cancel
         </Button>
-      </td>
-    </tr>
+        <Button type="submit" disabled={update.isPending}>
+          {update.isPending ? 'Saving…' : 'Save'}
+        </Button>
+      </div>
+    </Form>
+  );
+}
+
+function EditButton({ supplier }: { supplier: Supplier }) {
+  const [open, setOpen] = useState(false);
+  return (
+    <Dialog
+      title={`Edit ${supplier.name}`}
+      open={open}
+      onOpenChange={setOpen}
+      trigger={
+        <Button variant="secondary" aria-label={`Edit ${supplier.name}`}>
+          Edit
+        </Button>
+      }
+    >
+      {/* Mounted afresh each time it opens: it starts from the supplier as listed now. */}
+      {open && <EditSupplierForm supplier={supplier} onDone={() => setOpen(false)} />}
+    </Dialog>
   );
 }
 
@@ -118,48 +87,59 @@ function ArchiveButton({ supplier }: { supplier: Supplier }) {
   );
 }
 
-/** The store's suppliers, each row editable in place. */
+const col = createColumnHelper<Supplier>();
+
+/** The store's suppliers: sorted by name or by their last price list; each edited in a dialog. */
 export function SuppliersTable({ suppliers }: { suppliers: Supplier[] }) {
-  const [editing, setEditing] = useState<string | null>(null);
-  if (suppliers.length === 0) return <p className="text-ink-soft">No suppliers yet. Add the first one above.</p>;
+  const columns = useMemo(
+    () => [
+      col.accessor('name', {
+        header: 'Name',
+        enableSorting: true,
+        meta: { cellClassName: 'font-medium' },
+        cell: ({ row: { original: s } }) => (
+          <>
+            {s.name}
+            {s.archivedAt && <span className="ml-2 text-sm font-normal text-ink-soft">archived {formatDate(s.archivedAt)}</span>}
+          </>
+        ),
+      }),
+      col.accessor('key', { header: 'Key', meta: { cellClassName: 'whitespace-nowrap font-mono text-sm text-ink-soft' } }),
+      col.accessor((s) => s.contactEmail ?? '—', {
+        id: 'contactEmail',
+        header: 'Contact e-mail',
+        meta: { cellClassName: 'text-ink-soft' },
+      }),
+      col.accessor((s) => s.phone ?? '—', { id: 'phone', header: 'Phone', meta: { cellClassName: 'whitespace-nowrap text-ink-soft' } }),
+      col.accessor('lastPriceListAt', {
+        header: 'Last price list',
+        enableSorting: true,
+        sortingFn: (a, b) => (a.original.lastPriceListAt ?? '').localeCompare(b.original.lastPriceListAt ?? ''),
+        cell: ({ getValue }) => lastList(getValue()),
+        meta: { cellClassName: 'whitespace-nowrap text-ink-soft' },
+      }),
+      col.display({
+        id: 'actions',
+        header: () => <span className="sr-only">Actions</span>,
+        meta: { cellClassName: 'whitespace-nowrap text-right' },
+        cell: ({ row: { original: s } }) => (
+          <div className="flex justify-end gap-1">
+            {s.archivedAt === null && <EditButton supplier={s} />}
+            <ArchiveButton supplier={s} />
+          </div>
+        ),
+      }),
+    ],
+    [],
+  );
   return (
-    <table className="w-full text-left text-[15px]">
-      <thead className="border-b border-ink/10 text-xs uppercase tracking-wide text-ink-soft">
-        <tr>
-          <th className="w-[24%] py-2 pr-3">Name</th>
-          <th className="w-[14%] py-2 pr-3">Key</th>
-          <th className="w-[24%] py-2 pr-3">Contact e-mail</th>
-          <th className="w-[16%] py-2 pr-3">Phone</th>
-          <th className="py-2 pr-3">Last price list</th>
-          <th className="py-2" />
-        </tr>
-      </thead>
-      <tbody>
-        {suppliers.map((s) =>
-          editing === s.id ? (
-            <EditRow key={s.id} supplier={s} onDone={() => setEditing(null)} />
-          ) : (
-            <tr key={s.id} className="border-b border-ink/5">
-              <td className="py-2 pr-3 font-medium">
-                {s.name}
-                {s.archivedAt && <span className="ml-2 text-sm font-normal text-ink-soft">archived {formatDate(s.archivedAt)}</span>}
-              </td>
-              <td className="whitespace-nowrap py-2 pr-3 font-mono text-sm text-ink-soft">{s.key}</td>
-              <td className="py-2 pr-3 text-ink-soft">{s.contactEmail ?? '—'}</td>
-              <td className="py-2 pr-3 text-ink-soft">{s.phone ?? '—'}</td>
-              <td className="whitespace-nowrap py-2 pr-3 text-ink-soft">{lastList(s.lastPriceListAt)}</td>
-              <td className="whitespace-nowrap py-2 text-right">
-                {s.archivedAt === null && (
-                  <Button variant="secondary" aria-label={`Edit ${s.name}`} onClick={() => setEditing(s.id)}>
-                    Edit
-                  </Button>
-                )}{' '}
-                <ArchiveButton supplier={s} />
-              </td>
-            </tr>
-          ),
-        )}
-      </tbody>
-    </table>
+    <DataTable
+      label="Suppliers"
+      data={suppliers}
+      columns={columns}
+      getRowId={(s) => s.id}
+      initialSorting={[{ id: 'name', desc: false }]}
+      empty="No suppliers yet. Add the first one above."
+    />
   );
 }
