@@ -42,9 +42,11 @@ describe('API keys page', () => {
     await row.waitFor();
     expect(await s.page.getByText(key).count()).toBe(0);
 
-    await row.getByRole('button', { name: 'Revoke' }).click();
-    await row.getByText(`Revoke “${name}” for good?`).waitFor();
-    await row.getByRole('button', { name: 'Yes, revoke' }).click();
+    await row.getByRole('button', { name: `Revoke ${name}` }).click();
+    await s.page
+      .getByRole('dialog', { name: `Revoke “${name}” for good?` })
+      .getByRole('button', { name: 'Revoke' })
+      .click();
     await row.getByText(/^revoked/).waitFor();
     const after = await fetch(`${s.baseUrl}/api/search?q=coil`, { headers: { Authorization: `Bearer ${key}` } });
     expect(after.status).toBe(401);

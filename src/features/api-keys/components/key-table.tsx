@@ -1,36 +1,30 @@
 import { createColumnHelper } from '@tanstack/react-table';
-import { useState } from 'react';
 import type { ApiKey } from '@shared/schemas/api-keys';
 import { Button } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
-import { ErrorNote } from '@/components/ui/panel';
+import { ConfirmDialog } from '@/components/ui/dialog';
 import { useRevokeApiKey } from '../api/revoke-api-key';
 import { formatDateTime } from '@shared/format';
 
 const when = (iso: string | null) => (iso ? formatDateTime(iso) : '—');
 
-/** Revoking is final, so it asks once more in the row itself. */
+/** Revoking is final, so it asks first, saying what stops working. */
 function RevokeButton({ apiKey }: { apiKey: ApiKey }) {
-  const [asking, setAsking] = useState(false);
   const revoke = useRevokeApiKey();
-  if (!asking) {
-    return (
-      <Button variant="danger" onClick={() => setAsking(true)}>
-        Revoke
-      </Button>
-    );
-  }
   return (
-    <span className="inline-flex items-center gap-2">
-      <span className="text-sm">Revoke “{apiKey.name}” for good?</span>
-      <Button variant="danger" disabled={revoke.isPending} onClick={() => revoke.mutate(apiKey.id)}>
-        Yes, revoke
-      </Button>
-      <Button variant="ghost" onClick={() => setAsking(false)}>
-        Keep
-      </Button>
-      <ErrorNote error={revoke.error} />
-    </span>
+    <ConfirmDialog
+      title={`Revoke “${apiKey.name}” for good?`}
+      confirmLabel="Revoke"
+      tone="danger"
+      trigger={
+        <Button variant="danger" aria-label={`Revoke ${apiKey.name}`}>
+          Revoke
+        </Button>
+      }
+      onConfirm={() => revoke.mutateAsync(apiKey.id)}
+    >
+      <p>Every call with this key answers 401 from now on. A new key can be made at any time; this one cannot come back.</p>
+    </ConfirmDialog>
   );
 }
 
