@@ -1,4 +1,5 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
+import { useDebounce } from 'use-debounce';
 import type { PartKind } from '@shared/schemas/specs';
 import { useUser } from '@/app/use-user';
 import { Button } from '@/components/ui/button';
@@ -9,7 +10,6 @@ import { ResultsTable, type ResultsTableHandle } from '@/features/counter/compon
 import { SearchBox } from '@/features/counter/components/search-box';
 import { SpecFilters } from '@/features/counter/components/spec-filters';
 import { orderHits } from '@/features/counter/order-hits';
-import { useDebouncedValue } from '@/features/counter/use-debounced-value';
 import { useSlashToSearch } from '@/features/counter/use-slash-to-search';
 import { PartSheet } from '@/features/parts/components/part-sheet';
 import { AskForPart } from '@/features/transfers/components/ask-for-part';
@@ -36,7 +36,8 @@ function ResultsSummary({ shown, total, fetching }: { shown: number; total: numb
 export function CounterPage() {
   const user = useUser();
   const [text, setText] = useState('');
-  const [settledText, flushText] = useDebouncedValue(text, TYPING_PAUSE_MS);
+  // The search follows typing at a calm pace; Enter (or a barcode scanner's Enter) flushes it at once.
+  const [settledText, typing] = useDebounce(text, TYPING_PAUSE_MS);
   const [kind, setKind] = useState<PartKind | null>(null);
   const [filters, setFilters] = useState<Filters>({});
   const [vehicle, setVehicle] = useState<VehicleChoice>(NO_VEHICLE);
@@ -92,7 +93,7 @@ export function CounterPage() {
                 value={text}
                 onChange={setText}
                 onSubmit={() => {
-                  flushText();
+                  typing.flush();
                   setOpenIfSingle(text);
                 }}
                 onArrowDown={() => table.current?.focusSelected()}

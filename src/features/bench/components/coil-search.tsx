@@ -1,11 +1,12 @@
 import { useState } from 'react';
 import type { SearchHit } from '@shared/schemas/search';
-import { PartSearchBox, useDebounced } from '@/features/parts/components/part-search-box';
+import { useDebounce } from 'use-debounce';
+import { PartSearchBox, SEARCH_PAUSE_MS } from '@/features/parts/components/part-search-box';
 import { useSearchCoils } from '../api/search-coils';
 
 export function CoilSearch({ onPick }: { onPick: (hit: SearchHit) => void }) {
   const [q, setQ] = useState('');
-  const debounced = useDebounced(q);
+  const [debounced] = useDebounce(q, SEARCH_PAUSE_MS);
   const search = useSearchCoils(debounced);
   const active = debounced.trim().length >= 2;
   return (

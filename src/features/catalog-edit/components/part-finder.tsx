@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import type { SearchHit } from '@shared/schemas/search';
 import type { PartKind } from '@shared/schemas/specs';
-import { PartSearchBox, useDebounced } from '@/features/parts/components/part-search-box';
+import { useDebounce } from 'use-debounce';
+import { PartSearchBox, SEARCH_PAUSE_MS } from '@/features/parts/components/part-search-box';
 import { MIN_SEARCH_CHARS, useSearchParts } from '../api/search-parts';
 
 /**
@@ -23,7 +24,7 @@ export function PartFinder({
   onPick: (hit: SearchHit) => void;
 }) {
   const [q, setQ] = useState('');
-  const settled = useDebounced(q);
+  const [settled] = useDebounce(q, SEARCH_PAUSE_MS);
   const search = useSearchParts(settled, kind);
   const active = settled.trim().length >= MIN_SEARCH_CHARS;
   const found = active ? (search.data ?? []) : [];

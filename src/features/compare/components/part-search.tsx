@@ -1,13 +1,14 @@
 import { useState } from 'react';
 import type { PartKind } from '@shared/schemas/specs';
 import type { SearchHit } from '@shared/schemas/search';
-import { PartSearchBox, useDebounced } from '@/features/parts/components/part-search-box';
+import { useDebounce } from 'use-debounce';
+import { PartSearchBox, SEARCH_PAUSE_MS } from '@/features/parts/components/part-search-box';
 import { useSearchParts } from '../api/search-parts';
 
 /** The catalog's parts of one kind, by any brand's number or words. */
 export function PartSearch({ kind, label, onPick }: { kind: PartKind; label: string; onPick: (hit: SearchHit) => void }) {
   const [q, setQ] = useState('');
-  const debounced = useDebounced(q);
+  const [debounced] = useDebounce(q, SEARCH_PAUSE_MS);
   const search = useSearchParts(kind, debounced);
   const active = debounced.trim().length >= 2;
   return (

@@ -1,15 +1,8 @@
-import { useEffect, useId, useRef, useState, type KeyboardEvent } from 'react';
+import { useId, useRef, type KeyboardEvent } from 'react';
 import type { SearchHit } from '@shared/schemas/search';
 
-/** The value, once it has stopped changing for `ms`: a search box asks once per pause, not per key. */
-export function useDebounced<T>(value: T, ms = 200): T {
-  const [debounced, setDebounced] = useState(value);
-  useEffect(() => {
-    const t = setTimeout(() => setDebounced(value), ms);
-    return () => clearTimeout(t);
-  }, [value, ms]);
-  return debounced;
-}
+/** How long typing pauses before a picker's search box asks: once per pause, not per key. */
+export const SEARCH_PAUSE_MS = 200;
 
 /**
  * A search box with its hits, keyboard-operable: ↓ from the box into the list, ↑ ↓ within it,
