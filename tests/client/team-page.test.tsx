@@ -5,6 +5,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { User } from '@shared/schemas/auth';
 import type { TeamMember } from '@shared/schemas/users';
 import { TeamPage } from '@/app/routes/team/team';
+import { description, typeInto } from '../helpers/form-events';
 
 const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
 const ME: User = { id: uuid(1), email: 'admin@x.test', name: 'Avery Admin', role: 'admin', shopId: null, homeLocationId: null };
@@ -78,22 +79,10 @@ function renderTeam() {
   return screen.findByRole('form', { name: 'Invite a user' });
 }
 
-const type = (el: HTMLElement, value: string) => {
-  fireEvent.change(el, { target: { value } });
-  fireEvent.blur(el);
-};
-/** The texts that describe a control (its hint and its error), as a screen reader reads them. */
-const description = (el: HTMLElement) =>
-  (el.getAttribute('aria-describedby') ?? '')
-    .split(' ')
-    .filter(Boolean)
-    .map((id) => document.getElementById(id)?.textContent)
-    .join(' | ');
-
 describe('the invite form (react-hook-form on the shared invite schema)', () => {
   it('sends nothing while a field is wrong, and names each wrong field by its label in plain words', async () => {
     const form = await renderTeam();
-    type(within(form).getByLabelText('E-mail'), 'not-an-address');
+    typeInto(within(form).getByLabelText('E-mail'), 'not-an-address');
     fireEvent.click(within(form).getByRole('button', { name: 'Send invitation' }));
     const name = within(form).getByLabelText('Name');
     // Messages from shared/validation/plain-words.ts, led by the field's label.
@@ -105,8 +94,8 @@ describe('the invite form (react-hook-form on the shared invite schema)', () => 
 
   it('asks for a shop when the role is technician, under the Shop field', async () => {
     const form = await renderTeam();
-    type(within(form).getByLabelText('Name'), 'Robin Tech');
-    type(within(form).getByLabelText('E-mail'), 'robin@x.test');
+    typeInto(within(form).getByLabelText('Name'), 'Robin Tech');
+    typeInto(within(form).getByLabelText('E-mail'), 'robin@x.test');
     fireEvent.change(within(form).getByLabelText('Role'), { target: { value: 'technician' } });
     const shop = within(form).getByLabelText('Shop') as HTMLSelectElement;
     expect(shop.disabled).toBe(false);
@@ -131,8 +120,8 @@ describe('the invite form (react-hook-form on the shared invite schema)', () => 
 
   it("sends the home store chosen for the store's staff, and none for a technician", async () => {
     const form = await renderTeam();
-    type(within(form).getByLabelText('Name'), 'Robin Clerk');
-    type(within(form).getByLabelText('E-mail'), 'robin@x.test');
+    typeInto(within(form).getByLabelText('Name'), 'Robin Clerk');
+    typeInto(within(form).getByLabelText('E-mail'), 'robin@x.test');
     const home = within(form).getByLabelText('Home store') as HTMLSelectElement;
     expect(
       within(home)
@@ -157,8 +146,8 @@ describe('the invite form (react-hook-form on the shared invite schema)', () => 
 
   it("puts the API's field details on their fields, once, and what no field shows above the button", async () => {
     const form = await renderTeam();
-    type(within(form).getByLabelText('Name'), 'Robin');
-    type(within(form).getByLabelText('E-mail'), 'robin@x.test');
+    typeInto(within(form).getByLabelText('Name'), 'Robin');
+    typeInto(within(form).getByLabelText('E-mail'), 'robin@x.test');
     nextWrite = {
       status: 400,
       body: {
@@ -178,7 +167,7 @@ describe('the invite form (react-hook-form on the shared invite schema)', () => 
     expect(within(form).getAllByText(/already on the team/)).toHaveLength(1);
     expect(within(form).getByRole('alert').textContent).toBe('One invitation at a time.');
     // Typing again clears the server's message: it was about the old value.
-    type(email, 'robin2@x.test');
+    typeInto(email, 'robin2@x.test');
     await waitFor(() => expect(description(email)).toBe(''));
   });
 });

@@ -6,6 +6,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { Transfer } from '@shared/schemas/locations';
 import { TransfersPage } from '@/app/routes/transfers/transfers';
 import { AskForPart } from '@/features/transfers/components/ask-for-part';
+import { description, typeInto } from '../helpers/form-events';
 
 const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
 // Invented stores and an invented part.
@@ -79,17 +80,6 @@ function renderAt(path: string, element: ReactNode) {
   );
 }
 
-const type = (el: HTMLElement, value: string) => {
-  fireEvent.change(el, { target: { value } });
-  fireEvent.blur(el);
-};
-const description = (el: HTMLElement) =>
-  (el.getAttribute('aria-describedby') ?? '')
-    .split(' ')
-    .filter(Boolean)
-    .map((id) => document.getElementById(id)?.textContent)
-    .join(' | ');
-
 describe('asking another store for a part (the part panel)', () => {
   const open = async () => {
     renderAt('/counter', <AskForPart part={PART} elsewhere={[{ locationId: SALTMARSH.id, name: SALTMARSH.name, onHand: 3 }]} />);
@@ -105,17 +95,17 @@ describe('asking another store for a part (the part panel)', () => {
   it('holds the quantity to 1 up to what the other store has, and sends nothing until it is', async () => {
     const dialog = await open();
     const qty = within(dialog).getByLabelText('Quantity');
-    type(qty, '4');
+    typeInto(qty, '4');
     fireEvent.click(within(dialog).getByRole('button', { name: 'Ask Saltmarsh' }));
     await waitFor(() => expect(description(qty)).toContain('Quantity must be at most 3'));
-    type(qty, '0');
+    typeInto(qty, '0');
     await waitFor(() => expect(description(qty)).toContain('Quantity must be at least 1'));
     expect(sent).toEqual([]);
   });
 
   it('posts the transfer, says so and links to Transfers', async () => {
     const dialog = await open();
-    type(within(dialog).getByLabelText('Quantity'), '2');
+    typeInto(within(dialog).getByLabelText('Quantity'), '2');
     nextWrite = { status: 201, body: { transfer: transfer() } };
     fireEvent.click(within(dialog).getByRole('button', { name: 'Ask for 2 from Saltmarsh' }));
     expect((await within(dialog).findByRole('status')).textContent).toContain('Asked Saltmarsh for 2 × Tessaly TS-88.');
@@ -139,7 +129,7 @@ describe('the Transfers page', () => {
     await waitFor(() => expect(description(reason)).toContain('Reason must not be blank'));
     expect(sent).toEqual([]);
 
-    type(reason, 'Set aside for a customer.');
+    typeInto(reason, 'Set aside for a customer.');
     nextWrite = {
       status: 200,
       body: { transfer: transfer({ state: 'refused', refusalReason: 'Set aside for a customer.', steps: [] }) },
